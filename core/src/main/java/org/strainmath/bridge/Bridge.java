@@ -376,13 +376,16 @@ public final class Bridge {
      * bridge, is taken to be an offset of the output ratio and subtracted before the bridge
      * equation is inverted (common practice, no source). Replaces any earlier zeroing.
      *
-     * <p>The offset is exact only if the unbalance does not change the bridge's sensitivity. A
-     * real unbalance comes from an arm that is off its nominal value, which changes the
-     * sensitivity and the nonlinearity slightly: the error of this method is of second order,
-     * about (unbalance in V/V) × (strain), e.g. 1.0 µε at 1000 µε for a quarter bridge with 1
-     * mV/V of unbalance (compare {@link #zeroedInArm}). It matters when the unbalance is a
-     * sizeable fraction of the reading, and is below 0.1 % of the reading when the unbalance is
-     * below about 0.5 mV/V.
+     * <p>The offset is exact only when the unbalance leaves the output change unchanged, as an
+     * unbalance in the divider without active gauges does (arms 3 and 4 of a quarter bridge).
+     * When the active gauge itself is off its nominal resistance, its divider's sensitivity
+     * and nonlinearity change too, and the strain from this method reads low by a relative
+     * <pre>
+     *   (ε_offset − ε) / ε ≈ −r0·(4·r0 + K·ε)        (quarter bridge, r0 in V/V)
+     * </pre>
+     * (derived from the bridge equation, common practice, no source): 6e-6 at r0 = 1 mV/V and
+     * 1000 µε, 4e-4 at r0 = 10 mV/V. The difference matters only for unbalances of several
+     * mV/V; {@link #zeroedInArm} removes it when the arm that causes the unbalance is known.
      *
      * @throws NullPointerException     if {@code initialReading} is null
      * @throws IllegalArgumentException if {@code initialReading} is outside the physical output

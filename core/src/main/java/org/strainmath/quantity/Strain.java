@@ -19,7 +19,7 @@ public final class Strain implements Comparable<Strain> {
     /** Zero strain. */
     public static final Strain ZERO = new Strain(0.0);
 
-    private static final double PER_MICROSTRAIN = 1e-6;
+    private static final double MICROSTRAIN_PER_UNIT = 1e6;
 
     private final double value;
 
@@ -42,7 +42,7 @@ public final class Strain implements Comparable<Strain> {
      * @throws IllegalArgumentException if {@code microstrain} is NaN or infinite
      */
     public static Strain ofMicrostrain(double microstrain) {
-        return of(Checks.finite(microstrain, "microstrain") * PER_MICROSTRAIN);
+        return of(Checks.finite(microstrain, "microstrain") / MICROSTRAIN_PER_UNIT);
     }
 
     /**
@@ -61,7 +61,7 @@ public final class Strain implements Comparable<Strain> {
 
     /** The strain in µε. */
     public double toMicrostrain() {
-        return value / PER_MICROSTRAIN;
+        return value * MICROSTRAIN_PER_UNIT;
     }
 
     /** The strain in %. */

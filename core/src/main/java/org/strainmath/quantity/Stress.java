@@ -29,7 +29,7 @@ public final class Stress implements Comparable<Stress> {
      * Pascals in one pound-force per square inch, the double nearest to the exact
      * 4.4482216152605 / 0.0254² = 6894.757293168361336... (NIST SP 811, appendix B).
      */
-    public static final double PASCALS_PER_PSI = 6894.757293168361;
+    public static final double PASCALS_PER_PSI = 6894.757293168362;
 
     private final double pascals;
 
