@@ -54,9 +54,11 @@ import org.strainmath.quantity.VoltageRatio;
  * as such.
  *
  * <h2>Physical range</h2>
- * A strain is physical while every arm keeps a positive resistance and the bridge stays on its
- * monotonic branch. A reading outside the open interval of outputs that such strains produce has
- * no physical strain: the kernels return NaN for it (and the value methods throw).
+ * A strain is physical while every arm keeps a positive resistance, the bridge stays on its
+ * monotonic branch, and |ε| &lt; 10 m/m (1000 %, far beyond any bonded gauge; the bound keeps
+ * every product in the kernels finite). A reading outside the open interval of outputs that
+ * such strains produce has no physical strain: the kernels return NaN for it (and the value
+ * methods throw).
  *
  * <h2>Accuracy</h2>
  * The composed coefficients are correctly rounded. The forward output is within a few ulp of the
@@ -78,6 +80,12 @@ import org.strainmath.quantity.VoltageRatio;
 public final class Bridge {
 
     private static final MathContext EXACT_ENOUGH = new MathContext(60);
+
+    /**
+     * The largest strain magnitude the model accepts, 10 m/m (1000 %). No bonded gauge survives a
+     * twentieth of it; the bound keeps every per-sample product finite.
+     */
+    static final double STRAIN_LIMIT = 10.0;
 
     /** The shape of the rational function r(ε), which decides the kernel. */
     private enum Form {
@@ -166,9 +174,9 @@ public final class Bridge {
             this.form = Form.QUADRATIC;
         }
 
-        // Physical strains: every arm resistance positive ...
-        double low = Double.NEGATIVE_INFINITY;
-        double high = Double.POSITIVE_INFINITY;
+        // Physical strains: within the model's limit, every arm resistance positive ...
+        double low = -STRAIN_LIMIT;
+        double high = STRAIN_LIMIT;
         for (int i = 0; i < 4; i++) {
             double ai = a[i].doubleValue();
             double edge = -1.0 / (arms[i].effectiveGaugeFactor() * arms[i].strainMultiple());
@@ -203,25 +211,18 @@ public final class Bridge {
     }
 
     /**
-     * R1/(R1 + R2) − R4/(R3 + R4) at {@code strain}, an end of the physical range (possibly
-     * infinite), taking the limit where a divider's resistances vanish together.
+     * R1/(R1 + R2) − R4/(R3 + R4) at {@code strain}, an end of the physical range, taking the
+     * limit where a divider's resistances vanish together.
      */
     private static double dividerDifferenceAt(double strain, BigDecimal[] r, BigDecimal[] a) {
-        return divider(strain, r[0], a[0], r[1], a[1]) - divider(strain, r[3], a[3], r[2], a[2]);
+        BigDecimal e = new BigDecimal(strain);
+        return divider(e, r[0], a[0], r[1], a[1]) - divider(e, r[3], a[3], r[2], a[2]);
     }
 
-    private static double divider(double strain, BigDecimal rTop, BigDecimal aTop,
+    private static double divider(BigDecimal strain, BigDecimal rTop, BigDecimal aTop,
             BigDecimal rBottom, BigDecimal aBottom) {
-        BigDecimal top;
-        BigDecimal sum;
-        if (Double.isInfinite(strain)) {
-            top = aTop;
-            sum = aTop.add(aBottom);
-        } else {
-            BigDecimal e = new BigDecimal(strain);
-            top = rTop.add(aTop.multiply(e)).max(BigDecimal.ZERO);
-            sum = top.add(rBottom.add(aBottom.multiply(e)).max(BigDecimal.ZERO));
-        }
+        BigDecimal top = rTop.add(aTop.multiply(strain)).max(BigDecimal.ZERO);
+        BigDecimal sum = top.add(rBottom.add(aBottom.multiply(strain)).max(BigDecimal.ZERO));
         if (sum.signum() == 0) {
             top = rTop;
             sum = rTop.add(rBottom);
@@ -626,7 +627,7 @@ public final class Bridge {
 
     /**
      * The exact output ratio (V/V) at {@code strain} (m/m); NaN for NaN, an infinite strain or a
-     * strain outside the physical range. The same function as the block method
+     * strain outside the physical range (including |ε| &gt;= 10). The same function as the block method
      * {@link #toRatio(double[], int, double[], int, int)}, bit for bit. Never throws.
      */
     public double toRatio(double strain) {
@@ -652,8 +653,8 @@ public final class Bridge {
     /**
      * Converts {@code len} output ratios (V/V) from {@code src[srcOff...]} to strains (m/m) in
      * {@code dst[dstOff...]}. Allocation-free; the same function as {@link #toStrain(double)},
-     * bit for bit. {@code src} and {@code dst} may be the same array when
-     * {@code dstOff <= srcOff} (in place with equal offsets).
+     * bit for bit. {@code src} and {@code dst} may be the same array, with any offsets (in
+     * place when they are equal).
      *
      * @return the number of outputs set to NaN (NaN input or no physical strain)
      * @throws NullPointerException      if an array is null
@@ -661,6 +662,53 @@ public final class Bridge {
      */
     public int toStrain(double[] src, int srcOff, double[] dst, int dstOff, int len) {
         Checks.block(src, srcOff, dst, dstOff, len);
+        double[] from = Kernels.sameIndexSource(src, srcOff, dst, dstOff, len);
+        int nan = 0;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int stop = start + Math.min(Kernels.CHUNK, len - done);
+            switch (form) {
+                case LINEAR:
+                    inverseLinearBlock(from, dst, start, stop);
+                    break;
+                case FIRST_DEGREE:
+                    inverseFirstDegreeBlock(from, dst, start, stop);
+                    break;
+                default:
+                    inverseQuadraticBlock(from, dst, start, stop);
+                    break;
+            }
+            nan += Kernels.countNaN(dst, start, stop - start);
+        }
+        return nan;
+    }
+
+    // Blocks run in chunks of Kernels.CHUNK samples, so that the NaN count reads what the loop
+    // has just written while it is still in cache. One small method per loop, each reading and
+    // writing at one index, so that C2 compiles and vectorises each loop on its own.
+
+    private void inverseLinearBlock(double[] from, double[] dst, int start, int end) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double low = ratioLow;
+        final double high = ratioHigh;
+        for (int i = start; i < end; i++) {
+            dst[i] = inverseLinear(from[i], c0, c1, low, high);
+        }
+    }
+
+    private void inverseFirstDegreeBlock(double[] from, double[] dst, int start, int end) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        final double low = ratioLow;
+        final double high = ratioHigh;
+        for (int i = start; i < end; i++) {
+            dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high);
+        }
+    }
+
+    private void inverseQuadraticBlock(double[] from, double[] dst, int start, int end) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
@@ -669,32 +717,16 @@ public final class Bridge {
         final double sign = rootSign;
         final double low = ratioLow;
         final double high = ratioHigh;
-        switch (form) {
-            case LINEAR:
-                for (int i = 0; i < len; i++) {
-                    dst[dstOff + i] = inverseLinear(src[srcOff + i], c0, c1, low, high);
-                }
-                break;
-            case FIRST_DEGREE:
-                for (int i = 0; i < len; i++) {
-                    dst[dstOff + i] = inverseFirstDegree(src[srcOff + i], c0, c1, e1, low, high);
-                }
-                break;
-            default:
-                for (int i = 0; i < len; i++) {
-                    dst[dstOff + i] =
-                            inverseQuadratic(src[srcOff + i], c0, c1, c2, e1, e2, sign, low, high);
-                }
-                break;
+        for (int i = start; i < end; i++) {
+            dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
         }
-        return Kernels.countNaN(dst, dstOff, len);
     }
 
     /**
      * Converts {@code len} strains (m/m) from {@code src[srcOff...]} to output ratios (V/V) in
      * {@code dst[dstOff...]}. Allocation-free; the same function as {@link #toRatio(double)},
-     * bit for bit. {@code src} and {@code dst} may be the same array when
-     * {@code dstOff <= srcOff}.
+     * bit for bit. {@code src} and {@code dst} may be the same array, with any offsets (in
+     * place when they are equal).
      *
      * @return the number of outputs set to NaN (NaN input or a strain outside the physical range)
      * @throws NullPointerException      if an array is null
@@ -702,6 +734,18 @@ public final class Bridge {
      */
     public int toRatio(double[] src, int srcOff, double[] dst, int dstOff, int len) {
         Checks.block(src, srcOff, dst, dstOff, len);
+        double[] from = Kernels.sameIndexSource(src, srcOff, dst, dstOff, len);
+        int nan = 0;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int stop = start + Math.min(Kernels.CHUNK, len - done);
+            forwardBlock(from, dst, start, stop);
+            nan += Kernels.countNaN(dst, start, stop - start);
+        }
+        return nan;
+    }
+
+    private void forwardBlock(double[] from, double[] dst, int start, int end) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
@@ -709,42 +753,49 @@ public final class Bridge {
         final double e2 = d2;
         final double low = strainLow;
         final double high = strainHigh;
-        for (int i = 0; i < len; i++) {
-            dst[dstOff + i] = forward(src[srcOff + i], c0, c1, c2, e1, e2, low, high);
+        for (int i = start; i < end; i++) {
+            dst[i] = forward(from[i], c0, c1, c2, e1, e2, low, high);
         }
-        return Kernels.countNaN(dst, dstOff, len);
     }
 
     // The per-sample functions. Domain checks are arithmetic, not branches, so that the loops
-    // above stay vectorised: g is the distance to the nearer end of the open physical interval,
-    // clamped at 0, and the quotient (x·g)/(y·g) is 0/0 = NaN outside the interval.
+    // above stay vectorised (a conditional, or Math.min and Math.max on JDK 25, slow them down
+    // severalfold). For the open interval (low, high), both ends finite:
+    //   g = (x − low)·(high − x)        > 0 inside, <= 0 outside, NaN for NaN, −∞ for ±∞
+    //   g' = g + |g|                    2g inside, 0 outside, NaN for NaN and ±∞
+    // and the quotient (p·g')/(q·g') is p/q inside and 0/0 = NaN everywhere else.
+
+    private static double mask(double x, double low, double high) {
+        double g = (x - low) * (high - x);
+        return g + Math.abs(g);
+    }
 
     private static double forward(double e, double n0, double n1, double n2, double d1,
             double d2, double low, double high) {
-        double g = Math.min(Math.max(Math.min(e - low, high - e), 0.0), 1.0);
+        double g = mask(e, low, high);
         return ((n0 + e * (n1 + e * n2)) * g) / ((1.0 + e * (d1 + e * d2)) * g);
     }
 
     private static double inverseLinear(double r, double n0, double n1, double low,
             double high) {
-        double g = Math.max(Math.min(r - low, high - r), 0.0);
+        double g = mask(r, low, high);
         return ((r - n0) * g) / (n1 * g);
     }
 
     private static double inverseFirstDegree(double r, double n0, double n1, double d1,
             double low, double high) {
-        double g = Math.max(Math.min(r - low, high - r), 0.0);
+        double g = mask(r, low, high);
         return ((r - n0) * g) / ((n1 - r * d1) * g);
     }
 
     private static double inverseQuadratic(double r, double n0, double n1, double n2,
             double d1, double d2, double sign, double low, double high) {
-        double g = Math.max(Math.min(r - low, high - r), 0.0);
-        double c = n0 - r;
+        double g = mask(r, low, high);
+        double minusC = r - n0;
         double b = n1 - r * d1;
         double a = n2 - r * d2;
-        double root = Math.sqrt(b * b - 4.0 * a * c);
-        return (-2.0 * c * g) / ((b + sign * root) * g);
+        double root = Math.sqrt(b * b + 4.0 * a * minusC);
+        return (2.0 * minusC * g) / ((b + sign * root) * g);
     }
 
     // ---------------------------------------------------------------- text

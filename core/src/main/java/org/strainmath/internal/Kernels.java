@@ -7,21 +7,76 @@ package org.strainmath.internal;
  */
 public final class Kernels {
 
+    /**
+     * Samples per chunk of a block kernel: 2048 doubles (16 KiB) of output stay in the first-level
+     * cache between the arithmetic loop and the NaN count that reads them back.
+     */
+    public static final int CHUNK = 2048;
+
     private Kernels() {
     }
 
     /**
-     * The count of NaN values in {@code a[off, off + len)}. A pass of its own, so that the
+     * The count of NaN values in {@code a[off, off + len)}, in a pass of its own so that the
      * arithmetic loop before it holds no branch and no counter and stays vectorised.
+     *
+     * <p>Most blocks hold no NaN, so the pass first sums the block in eight independent
+     * accumulators (no branch, about twice as fast as counting on these machines): a sum that
+     * is finite proves the block free of NaN. Only a NaN, or an infinity or an overflow of the
+     * sum, leads to the exact count.
      */
     public static int countNaN(double[] a, int off, int len) {
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        double s4 = 0;
+        double s5 = 0;
+        double s6 = 0;
+        double s7 = 0;
+        int i = off;
+        int end = off + len;
+        for (; i + 7 < end; i += 8) {
+            s0 += a[i];
+            s1 += a[i + 1];
+            s2 += a[i + 2];
+            s3 += a[i + 3];
+            s4 += a[i + 4];
+            s5 += a[i + 5];
+            s6 += a[i + 6];
+            s7 += a[i + 7];
+        }
+        for (; i < end; i++) {
+            s0 += a[i];
+        }
+        double sum = ((s0 + s1) + (s2 + s3)) + ((s4 + s5) + (s6 + s7));
+        if (sum - sum == 0) {
+            return 0;
+        }
         int count = 0;
-        for (int i = off, end = off + len; i < end; i++) {
-            double x = a[i];
+        for (int j = off; j < end; j++) {
+            double x = a[j];
             if (x != x) {
                 count++;
             }
         }
         return count;
+    }
+
+    /**
+     * The array a kernel reads so that it can index its input and its output with one index:
+     * {@code src} itself when the offsets are equal; otherwise {@code dst}, after the input has
+     * been copied into place with {@link System#arraycopy} (which handles any overlap). C2 does
+     * not vectorise a loop that reads and writes double arrays at two different unknown offsets,
+     * since they may alias; with one index it does, and the copy costs a fraction of the
+     * arithmetic.
+     */
+    public static double[] sameIndexSource(double[] src, int srcOff, double[] dst, int dstOff,
+            int len) {
+        if (srcOff == dstOff) {
+            return src;
+        }
+        System.arraycopy(src, srcOff, dst, dstOff, len);
+        return dst;
     }
 }

@@ -159,4 +159,23 @@ class BridgeKernelTest {
         assertThat(bridge.toRatio(Double.NaN)).isNaN();
         assertThat(bridge.toStrain(Double.MIN_VALUE)).isPositive();
     }
+
+    @Test
+    void overlappingRangesOfOneArrayConvertAsIfCopiedFirst() {
+        Bridge bridge = Bridge.halfAxialPoisson(StrainGauge.ofOhms(350, 2.0), 0.3);
+        double[] original = inputs(new SplittableRandom(15), 0.01, 2.0);
+        for (int shift : new int[] {-3, -1, 1, 2, 17}) {
+            double[] data = original.clone();
+            int srcOff = 20;
+            int dstOff = srcOff + shift;
+            int len = 1000;
+            bridge.toStrain(data, srcOff, data, dstOff, len);
+            double[] expected = new double[len];
+            for (int i = 0; i < len; i++) {
+                expected[i] = bridge.toStrain(original[srcOff + i]);
+            }
+            assertThat(java.util.Arrays.copyOfRange(data, dstOff, dstOff + len))
+                    .as("shift %d", shift).isEqualTo(expected);
+        }
+    }
 }

@@ -50,7 +50,7 @@ class BridgeTest {
         // Dally & Riley, Experimental Stress Analysis, 4th ed.: ε = 4·r / (K·(1 − 2·r)) for a
         // quarter bridge (as recalled from memory; re-derived from the bridge equation).
         Bridge quarter = Bridge.quarter(GAUGE_120);
-        for (double r : new double[] {1e-3, -1e-3, 2.5e-2, -0.3, 0.49}) {
+        for (double r : new double[] {1e-3, -1e-3, 2.5e-2, -0.3, 0.45}) {
             double expected = 4 * r / (2.0 * (1 - 2 * r));
             assertThat(quarter.toStrain(r)).as("r = %s", r)
                     .isCloseTo(expected, within(Math.abs(expected) * 1e-14));
@@ -162,22 +162,26 @@ class BridgeTest {
     @Test
     void outputsOutsideThePhysicalRangeHaveNoStrain() {
         Bridge quarter = Bridge.quarter(GAUGE_120);
-        // Quarter bridge: r = R1/(R1 + R) − 1/2 lies in (−1/2, 1/2) for R1 in (0, ∞).
-        assertThat(quarter.toStrain(0.5)).isNaN();
+        // Quarter bridge: r = R1/(R1 + R) − 1/2 lies in (−1/2, 1/2) for R1 in (0, ∞); the model
+        // stops at ε = 10, where r = K·ε/(4 + 2·K·ε) = 20/44 (closed form).
         assertThat(quarter.toStrain(-0.5)).isNaN();
-        assertThat(quarter.toStrain(0.4999)).isFinite();
+        assertThat(quarter.toStrain(20.0 / 44 * 0.9999)).isFinite();
+        assertThat(quarter.toStrain(20.0 / 44 * 1.0001)).isNaN();
+        assertThat(quarter.toStrain(0.5)).isNaN();
         assertThat(quarter.toStrain(-0.4999)).isCloseTo(-0.5, within(1e-3));
         assertThatThrownBy(() -> quarter.strainAt(VoltageRatio.ofVoltsPerVolt(0.6)))
                 .isInstanceOf(IllegalArgumentException.class)
-                .hasMessage("ratio must be in the physical output range (-500.0 mV/V, 500.0 mV/V)"
+                .hasMessage("ratio must be in the physical output range (-500.0 mV/V, 454.545 mV/V)"
                         + " of this bridge: 600.0 mV/V");
         // The gauge has no positive resistance at or below −1/K = −500 000 µε.
         assertThat(quarter.toRatio(-0.5)).isNaN();
         assertThat(quarter.toRatio(-0.4999)).isFinite();
         assertThatThrownBy(() -> quarter.outputAt(Strain.ofMicrostrain(-600_000)))
                 .isInstanceOf(IllegalArgumentException.class)
-                .hasMessage("strain must be in the physical range (-500000.0 µε, Infinity µε) of"
+                .hasMessage("strain must be in the physical range (-500000.0 µε, 10000000.0 µε) of"
                         + " this bridge: -600000.0 µε");
+        assertThat(quarter.toRatio(9.999)).isFinite();
+        assertThat(quarter.toRatio(10.0)).isNaN();
         assertThatThrownBy(() -> quarter.nonlinearityError(Strain.ofMicrostrain(-600_000)))
                 .isInstanceOf(IllegalArgumentException.class)
                 .hasMessageStartingWith("strain must be in the physical range");

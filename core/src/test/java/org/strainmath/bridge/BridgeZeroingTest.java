@@ -119,7 +119,7 @@ class BridgeZeroingTest {
         assertThatThrownBy(() -> quarter.zeroedByOffset(VoltageRatio.ofVoltsPerVolt(0.7)))
                 .isInstanceOf(IllegalArgumentException.class)
                 .hasMessage("initialReading must be in the physical output range (-500.0 mV/V,"
-                        + " 500.0 mV/V) of the unzeroed bridge: 700.0 mV/V");
+                        + " 454.545 mV/V) of the unzeroed bridge: 700.0 mV/V");
         assertThatThrownBy(() -> quarter.zeroedInArm(VoltageRatio.ofVoltsPerVolt(0.5), 1))
                 .isInstanceOf(IllegalArgumentException.class)
                 .hasMessage("initialReading cannot be explained by arm 1 with a positive"

@@ -1,0 +1,31 @@
+package org.strainmath.calibration;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.lang.module.ModuleDescriptor;
+import java.lang.module.ModuleDescriptor.Requires;
+
+import org.junit.jupiter.api.Test;
+import org.strainmath.quantity.Strain;
+
+/** The module stands on core, as the layering of the design says, and exports nothing yet. */
+class ModuleLayoutTest {
+
+    @Test
+    void moduleReadsCoreTransitivelyAndExportsNothingYet() {
+        ModuleDescriptor descriptor = ModuleLayoutTest.class.getModule().getDescriptor();
+        assertThat(descriptor).as("tests run on the module path").isNotNull();
+        assertThat(descriptor.name()).isEqualTo("org.strainmath.calibration");
+        assertThat(descriptor.requires())
+                .filteredOn(r -> r.name().equals("org.strainmath.core"))
+                .singleElement()
+                .satisfies(r -> assertThat(r.modifiers()).contains(Requires.Modifier.TRANSITIVE));
+        assertThat(descriptor.exports()).isEmpty();
+    }
+
+    @Test
+    void coreQuantitiesAreReadable() {
+        assertThat(ModuleLayoutTest.class.getModule().canRead(Strain.class.getModule())).isTrue();
+        assertThat(Strain.ofMicrostrain(250).toMicrostrain()).isEqualTo(250.0);
+    }
+}
