@@ -410,7 +410,8 @@ public final class Bridge {
      * is attributed to arm {@code arm} being off its nominal resistance, and that arm's
      * unstrained resistance is solved from the bridge equation so that the zeroed bridge reads
      * {@code initialReading} at zero strain. Sensitivity and nonlinearity then follow from the
-     * real arm resistances. Replaces any earlier zeroing.
+     * real arm resistances. Replaces an earlier offset zeroing and an earlier zeroing in the
+     * same arm; a zeroing in another arm stays in that arm.
      *
      * <p>For arm 1 (arms 2, 3, 4 likewise):
      * <pre>
@@ -540,6 +541,16 @@ public final class Bridge {
         return 4 * slope / gaugeFactor();
     }
 
+    /** The lower end of the open interval of physical strains (m/m), for tests. */
+    double strainLow() {
+        return strainLow;
+    }
+
+    /** The upper end of the open interval of physical strains (m/m), for tests. */
+    double strainHigh() {
+        return strainHigh;
+    }
+
     // ---------------------------------------------------------------- value API
 
     /**
@@ -627,8 +638,8 @@ public final class Bridge {
 
     /**
      * The exact output ratio (V/V) at {@code strain} (m/m); NaN for NaN, an infinite strain or a
-     * strain outside the physical range (including |ε| &gt;= 10). The same function as the block method
-     * {@link #toRatio(double[], int, double[], int, int)}, bit for bit. Never throws.
+     * strain outside the physical range (including |ε| &gt;= 10). The same function as the block
+     * method {@link #toRatio(double[], int, double[], int, int)}, bit for bit. Never throws.
      */
     public double toRatio(double strain) {
         return forward(strain, n0, n1, n2, d1, d2, strainLow, strainHigh);

@@ -23,7 +23,7 @@ import org.strainmath.quantity.Resistance;
  *   m   strain multiple, dimensionless
  * </pre>
  *
- * <p>Immutable and thread-safe.
+ * <p>Immutable and thread-safe; equal to another arm of the same kind and data.
  */
 public final class BridgeArm {
 
@@ -120,6 +120,23 @@ public final class BridgeArm {
             return completion(resistance);
         }
         return new BridgeArm(resistance, gauge.withNominalResistance(resistance), strainMultiple);
+    }
+
+    /** Equal when kind, resistance, gauge and strain multiple are equal. */
+    @Override
+    public boolean equals(Object o) {
+        if (!(o instanceof BridgeArm)) {
+            return false;
+        }
+        BridgeArm other = (BridgeArm) o;
+        return nominalResistance.equals(other.nominalResistance)
+                && Objects.equals(gauge, other.gauge)
+                && Double.compare(strainMultiple, other.strainMultiple) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(nominalResistance, gauge, strainMultiple);
     }
 
     /**

@@ -30,7 +30,7 @@ import org.strainmath.quantity.Strain;
  *   g.resistanceChangeInOhms(Strain.ofMicrostrain(250));   // 0.06 (Ω)
  * </pre>
  *
- * <p>Immutable and thread-safe.
+ * <p>Immutable and thread-safe; equal to another gauge with the same data.
  */
 public final class StrainGauge {
 
@@ -144,6 +144,23 @@ public final class StrainGauge {
                             + ": " + strain);
         }
         return Resistance.ofOhms(ohms);
+    }
+
+    /** Equal when nominal resistance, gauge factor and transverse sensitivity are equal. */
+    @Override
+    public boolean equals(Object o) {
+        if (!(o instanceof StrainGauge)) {
+            return false;
+        }
+        StrainGauge other = (StrainGauge) o;
+        return nominalResistance.equals(other.nominalResistance)
+                && Double.compare(gaugeFactor, other.gaugeFactor) == 0
+                && Double.compare(transverseSensitivity, other.transverseSensitivity) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(nominalResistance, gaugeFactor, transverseSensitivity);
     }
 
     /** {@code StrainGauge[120.0 Ω, K=2.0]}, with {@code Kt=1.2 %} when set. */

@@ -17,6 +17,7 @@ class BridgeArmTest {
         BridgeArm active = BridgeArm.active(GAUGE, -0.3);
         assertThat(active.isActive()).isTrue();
         assertThat(active.isDummy()).isFalse();
+        assertThat(active.isCompletion()).isFalse();
         assertThat(active.strainMultiple()).isEqualTo(-0.3);
         assertThat(active.gauge()).contains(GAUGE);
         assertThat(active).hasToString("active gauge ×-0.3 (120.0 Ω, K=2.0)");
@@ -24,6 +25,7 @@ class BridgeArmTest {
         BridgeArm dummy = BridgeArm.dummy(GAUGE);
         assertThat(dummy.isDummy()).isTrue();
         assertThat(dummy.isActive()).isFalse();
+        assertThat(dummy.isCompletion()).isFalse();
         assertThat(dummy.strainMultiple()).isZero();
         assertThat(dummy).hasToString("dummy gauge (120.0 Ω, K=2.0)");
 
@@ -32,6 +34,19 @@ class BridgeArmTest {
         assertThat(completion.gauge()).isEmpty();
         assertThat(completion.nominalResistance().toOhms()).isEqualTo(350.0);
         assertThat(completion).hasToString("completion resistor 350.0 Ω");
+    }
+
+    @Test
+    void armsWithTheSameKindAndDataAreEqual() {
+        assertThat(BridgeArm.active(GAUGE, -0.3)).isEqualTo(BridgeArm.active(GAUGE, -0.3))
+                .hasSameHashCodeAs(BridgeArm.active(GAUGE, -0.3))
+                .isNotEqualTo(BridgeArm.active(GAUGE, 0.3))
+                .isNotEqualTo(BridgeArm.dummy(GAUGE))
+                .isNotEqualTo(GAUGE);
+        assertThat(BridgeArm.dummy(GAUGE))
+                .isNotEqualTo(BridgeArm.completion(GAUGE.nominalResistance()));
+        assertThat(BridgeArm.completion(Resistance.ofOhms(120)))
+                .isEqualTo(BridgeArm.completion(Resistance.ofOhms(120)));
     }
 
     @ParameterizedTest

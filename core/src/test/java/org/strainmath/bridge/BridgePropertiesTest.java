@@ -102,4 +102,33 @@ class BridgePropertiesTest {
             assertThat(-down).isGreaterThan(up);
         }
     }
+
+    static Stream<Arguments> wholeRangeCases() {
+        SplittableRandom random = new SplittableRandom(SEED + 1);
+        Stream.Builder<Arguments> cases = Stream.builder();
+        for (Arrangement arrangement : Arrangement.values()) {
+            for (int i = 0; i < 40; i++) {
+                cases.add(Arguments.of(arrangement, random.nextDouble(1.5, 4.5),
+                        random.nextDouble(0.0, 0.5), random.nextDouble(0.0, 1.0)));
+            }
+        }
+        return cases.build();
+    }
+
+    @ParameterizedTest(name = "{0} K={1} nu={2} at {3} of the range")
+    @MethodSource("wholeRangeCases")
+    void inverseHoldsOverTheWholePhysicalRange(Arrangement arrangement, double k, double nu,
+            double fraction) {
+        // Far beyond any gauge's limit, up to the ends of the model's range (an arm resistance
+        // near zero, or |ε| near 10), where the quadratic's B may change sign: the root form must
+        // stay accurate there too. Oracle: ExactBridge (50 digits) for the reading. Tolerance
+        // 1e-11 relative: within the range's inner 98 % the inverse is well conditioned.
+        Bridge bridge = arrangement.build(StrainGauge.ofOhms(350, k), nu);
+        double low = bridge.strainLow();
+        double high = bridge.strainHigh();
+        double strain = low + (high - low) * (0.01 + 0.98 * fraction);
+        double ratio = ExactBridge.ratio(bridge, strain).doubleValue();
+        assertThat(bridge.toStrain(ratio))
+                .isCloseTo(strain, within(Math.max(1e-11 * Math.abs(strain), 1e-18)));
+    }
 }

@@ -152,4 +152,43 @@ class BridgeZeroingTest {
         assertThat(zeroed.strainAt(zeroed.outputAt(Strain.ofMicrostrain(800))).toMicrostrain())
                 .isCloseTo(800.0, within(800e-12));
     }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.EnumSource(Arrangement.class)
+    void zeroedBridgesOfEveryArrangementRoundTripAndLineariseFromTheirZero(Arrangement arrangement) {
+        // Oracles: the round trip itself, and the definitions of the linearised strain
+        // (r − r0)/(dr/dε) and of the nonlinearity error (ε_lin − ε)/ε evaluated from 50-digit
+        // readings of the zeroed bridge (ExactBridge plus the offset, or with the solved arm).
+        Bridge nominal = arrangement.build(StrainGauge.ofOhms(350, 2.1), 0.3);
+        VoltageRatio initial = VoltageRatio.ofMillivoltsPerVolt(1.7);
+        for (Bridge zeroed : new Bridge[] {nominal.zeroedByOffset(initial),
+            nominal.zeroedInArm(initial, 1), nominal.zeroedInArm(initial, 4)}) {
+            assertThat(zeroed.zeroOutput().toVoltsPerVolt()).isCloseTo(1.7e-3, within(1e-17));
+            assertThat(zeroed.linearisedStrainAt(initial).value()).isCloseTo(0.0, within(1e-15));
+            double slope = zeroed.sensitivity().toVoltsPerVolt() * 1e3;
+            for (double e : new double[] {-0.02, -1e-4, 3e-4, 0.03}) {
+                double reading = zeroed.toRatio(e);
+                assertThat(zeroed.toStrain(reading)).as("%s", zeroed)
+                        .isCloseTo(e, within(Math.abs(e) * 1e-11));
+                double linearised = (reading - 1.7e-3) / slope;
+                assertThat(zeroed.linearisedStrainAt(VoltageRatio.ofVoltsPerVolt(reading)).value())
+                        .isCloseTo(linearised, within(Math.abs(linearised) * 1e-12));
+                assertThat(zeroed.nonlinearityError(Strain.of(e)))
+                        .isCloseTo((linearised - e) / e, within(1e-9));
+            }
+        }
+    }
+
+    @Test
+    void rezeroingChecksTheReadingAgainstTheUnzeroedRange() {
+        // The unzeroed quarter bridge reads at most 20/44 V/V (ε = 10, closed form); a first
+        // offset of 5 mV/V must not widen what a second zeroing accepts.
+        Bridge once = Bridge.quarter(GAUGE).zeroedByOffset(VoltageRatio.ofMillivoltsPerVolt(5));
+        assertThatThrownBy(() -> once.zeroedByOffset(VoltageRatio.ofVoltsPerVolt(0.46)))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessage("initialReading must be in the physical output range (-500.0 mV/V,"
+                        + " 454.545 mV/V) of the unzeroed bridge: 460.0 mV/V");
+        assertThat(once.zeroedByOffset(VoltageRatio.ofVoltsPerVolt(-0.4999)).toStrain(-0.4999))
+                .isCloseTo(0.0, within(1e-15));
+    }
 }

@@ -38,6 +38,18 @@ class StrainGaugeTest {
         assertThat(StrainGauge.ofOhms(120, 2)).hasToString("StrainGauge[120.0 Ω, K=2.0]");
     }
 
+    @Test
+    void gaugesWithTheSameDataAreEqual() {
+        StrainGauge gauge = StrainGauge.ofOhms(350, 2.1).withTransverseSensitivity(0.01);
+        assertThat(gauge).isEqualTo(StrainGauge.of(Resistance.ofOhms(350), 2.1)
+                .withTransverseSensitivity(0.01))
+                .hasSameHashCodeAs(StrainGauge.ofOhms(350, 2.1).withTransverseSensitivity(0.01))
+                .isNotEqualTo(StrainGauge.ofOhms(350, 2.1))
+                .isNotEqualTo(StrainGauge.ofOhms(350, 2.0).withTransverseSensitivity(0.01))
+                .isNotEqualTo(StrainGauge.ofOhms(120, 2.1).withTransverseSensitivity(0.01))
+                .isNotEqualTo("350 Ω");
+    }
+
     @ParameterizedTest
     @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, 0.0, -2.0})
     void gaugeFactorMustBePositiveAndFinite(double bad) {

@@ -35,6 +35,11 @@ class ResistanceTest {
         assertThat(Resistance.ofOhms(174_650)).hasToString("174.65 kΩ");
         assertThat(Resistance.ofMegaohms(2)).hasToString("2.0 MΩ");
         assertThat(Resistance.ZERO).hasToString("0.0 Ω");
+        assertThat(Resistance.ofOhms(1000)).hasToString("1.0 kΩ");
+        assertThat(Resistance.ofOhms(999.9)).hasToString("999.9 Ω");
+        assertThat(Resistance.ofMegaohms(1)).hasToString("1.0 MΩ");
+        assertThat(Resistance.ofOhms(-0.0)).isEqualTo(Resistance.ZERO);
+        assertThat(Resistance.ofOhms(1).isZero()).isFalse();
     }
 
     @Test

@@ -63,6 +63,11 @@ class StressTest {
                 .isNotEqualTo(Strain.ZERO);
     }
 
+    @Test
+    void negativeZeroIsZero() {
+        assertThat(Stress.ofPascals(-0.0)).isEqualTo(Stress.ZERO).hasSameHashCodeAs(Stress.ZERO);
+    }
+
     @ParameterizedTest
     @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
     void nonFiniteValuesAreRejectedWithTheirName(double bad) {

@@ -35,6 +35,7 @@ class TemperatureTest {
                 .isLessThan(Temperature.ofCelsius(1))
                 .isNotEqualTo(Strain.ZERO);
         assertThat(Temperature.ofCelsius(23)).hasToString("23.0 °C");
+        assertThat(Temperature.ofKelvin(-0.0)).isEqualTo(Temperature.ofKelvin(0));
     }
 
     @ParameterizedTest

@@ -41,6 +41,11 @@ class VoltageRatioTest {
         assertThat(VoltageRatio.ofVoltsPerVolt(4.995004995004995e-4)).hasToString("0.4995 mV/V");
     }
 
+    @Test
+    void negativeZeroIsZero() {
+        assertThat(VoltageRatio.ofVoltsPerVolt(-0.0)).isEqualTo(VoltageRatio.ZERO).hasSameHashCodeAs(VoltageRatio.ZERO);
+    }
+
     @ParameterizedTest
     @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
     void nonFiniteValuesAreRejectedWithTheirName(double bad) {

@@ -36,6 +36,9 @@ class VoltageTest {
         assertThat(Voltage.ofMillivolts(-1.5)).hasToString("-1.5 mV");
         assertThat(Voltage.ofMicrovolts(12.5)).hasToString("12.5 µV");
         assertThat(Voltage.ZERO).hasToString("0.0 V");
+        assertThat(Voltage.ofVolts(1)).hasToString("1.0 V");
+        assertThat(Voltage.ofMillivolts(1)).hasToString("1.0 mV");
+        assertThat(Voltage.ofVolts(-0.0)).isEqualTo(Voltage.ZERO);
     }
 
     @Test
