@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.SplittableRandom;
+import java.util.function.DoubleUnaryOperator;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -43,19 +44,35 @@ class BridgeKernelTest {
         return count;
     }
 
+    /** A block method of {@link Bridge}, as a method reference. */
+    private interface BlockKernel {
+        int convert(double[] src, int srcOff, double[] dst, int dstOff, int len);
+    }
+
+    /**
+     * Converts {@code src} with the block method and with the scalar method, and asserts that
+     * they agree bit for bit and that the block method counts the NaN outputs.
+     */
+    private static int assertBlockIsScalar(double[] src, BlockKernel block,
+            DoubleUnaryOperator scalar) {
+        double[] dst = new double[src.length];
+        int nan = block.convert(src, 0, dst, 0, src.length);
+        double[] expected = new double[src.length];
+        for (int i = 0; i < src.length; i++) {
+            expected[i] = scalar.applyAsDouble(src[i]);
+        }
+        assertThat(dst).isEqualTo(expected);
+        assertThat(nan).isEqualTo(countNaN(expected));
+        return nan;
+    }
+
     @ParameterizedTest
     @EnumSource(Arrangement.class)
     void blockInverseIsTheScalarInverseBitForBit(Arrangement arrangement) {
         Bridge bridge = arrangement.build(StrainGauge.ofOhms(350, 2.1), 0.3);
         double[] src = inputs(new SplittableRandom(11), 0.02, 3.0);
-        double[] dst = new double[LENGTH];
-        int nan = bridge.toStrain(src, 0, dst, 0, LENGTH);
-        double[] expected = new double[LENGTH];
-        for (int i = 0; i < LENGTH; i++) {
-            expected[i] = bridge.toStrain(src[i]);
-        }
-        assertThat(dst).isEqualTo(expected);
-        assertThat(nan).isEqualTo(countNaN(expected)).isGreaterThan(LENGTH / 10);
+        assertThat(assertBlockIsScalar(src, bridge::toStrain, bridge::toStrain))
+                .isGreaterThan(LENGTH / 10);
     }
 
     @ParameterizedTest
@@ -63,14 +80,7 @@ class BridgeKernelTest {
     void blockForwardIsTheScalarForwardBitForBit(Arrangement arrangement) {
         Bridge bridge = arrangement.build(StrainGauge.ofOhms(120, 2.0), 0.3);
         double[] src = inputs(new SplittableRandom(12), 0.05, 1e9);
-        double[] dst = new double[LENGTH];
-        int nan = bridge.toRatio(src, 0, dst, 0, LENGTH);
-        double[] expected = new double[LENGTH];
-        for (int i = 0; i < LENGTH; i++) {
-            expected[i] = bridge.toRatio(src[i]);
-        }
-        assertThat(dst).isEqualTo(expected);
-        assertThat(nan).isEqualTo(countNaN(expected)).isGreaterThan(0);
+        assertThat(assertBlockIsScalar(src, bridge::toRatio, bridge::toRatio)).isGreaterThan(0);
     }
 
     @Test
@@ -112,15 +122,12 @@ class BridgeKernelTest {
     void zeroedBridgesConvertBlocksLikeTheirScalars() {
         Bridge bridge = Bridge.fullAxialPoisson(StrainGauge.ofOhms(350, 2.0), 0.3)
                 .zeroedByOffset(VoltageRatio.ofMillivoltsPerVolt(0.8));
-        double[] src = inputs(new SplittableRandom(14), 0.01, 2.0);
-        double[] dst = new double[LENGTH];
-        int nan = bridge.toStrain(src, 0, dst, 0, LENGTH);
-        double[] expected = new double[LENGTH];
-        for (int i = 0; i < LENGTH; i++) {
-            expected[i] = bridge.toStrain(src[i]);
-        }
-        assertThat(dst).isEqualTo(expected);
-        assertThat(nan).isEqualTo(countNaN(expected));
+        assertBlockIsScalar(inputs(new SplittableRandom(14), 0.01, 2.0), bridge::toStrain,
+                bridge::toStrain);
+        Bridge halfBending = Bridge.halfBending(StrainGauge.ofOhms(350, 2.0))
+                .zeroedInArm(VoltageRatio.ofMillivoltsPerVolt(-1.1), 3);
+        assertBlockIsScalar(inputs(new SplittableRandom(16), 0.01, 2.0), halfBending::toStrain,
+                halfBending::toStrain);
     }
 
     @Test
