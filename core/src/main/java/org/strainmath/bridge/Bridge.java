@@ -32,6 +32,13 @@ import org.strainmath.quantity.VoltageRatio;
  * positive output. Each arm is a {@link BridgeArm}: R_i(ε) = R0_i·(1 + K_i·m_i·ε), so that
  * every arm is affine in the measured strain ε.
  *
+ * <h2>Lead wires</h2>
+ * A lead in series with an arm adds a constant Li to it; two excitation leads of together Le,
+ * without remote sense, leave the bridge the share Rb/(Rb + Le) of the excitation, Rb the
+ * bridge's input resistance. Both stay exact: the equation becomes
+ * r = (R1·R3 − R2·R4) / ((R1 + R2)·(R3 + R4) + Le·(R1 + R2 + R3 + R4)) with Ri including Li,
+ * which is still of the form below.
+ *
  * <h2>Composition</h2>
  * When the bridge is built, the equation is expanded once, exactly (in {@link BigDecimal}), into
  * <pre>
@@ -87,6 +94,8 @@ public final class Bridge {
      */
     static final double STRAIN_LIMIT = 10.0;
 
+    private static final double[] NO_LEADS = new double[4];
+
     /** The shape of the rational function r(ε), which decides the kernel. */
     private enum Form {
         /** r = n0 + n1·ε. */
@@ -99,6 +108,10 @@ public final class Bridge {
 
     private final String arrangement;
     private final BridgeArm[] arms;
+    /** Lead resistance in series with each arm, Ω. */
+    private final double[] armLeads;
+    /** Total resistance of the two excitation leads, Ω (0 with remote sense). */
+    private final double excitationLeads;
     /** Added to the bridge equation by {@link #zeroedByOffset}: V/V. */
     private final double offset;
 
@@ -109,6 +122,10 @@ public final class Bridge {
     private final double d2;
     /** dr/dε at ε = 0. */
     private final double slope;
+    /** The slope the same arms give without any lead resistance. */
+    private final double slopeWithoutLeads;
+    /** The output at zero strain the same arms give without any lead resistance. */
+    private final double zeroWithoutLeads;
     /** The sign of the slope, which selects the physical root. */
     private final double rootSign;
     private final Form form;
@@ -121,113 +138,169 @@ public final class Bridge {
     private final double ratioLow;
     private final double ratioHigh;
 
-    private Bridge(String arrangement, BridgeArm[] arms, double offset) {
+    private Bridge(String arrangement, BridgeArm[] arms, double[] armLeads, double excitationLeads,
+            double offset) {
         this.arrangement = arrangement;
         this.arms = arms;
+        this.armLeads = armLeads;
+        this.excitationLeads = excitationLeads;
         this.offset = offset;
 
-        BigDecimal[] r = new BigDecimal[4];
-        BigDecimal[] a = new BigDecimal[4];
-        for (int i = 0; i < 4; i++) {
-            BridgeArm arm = arms[i];
-            r[i] = new BigDecimal(arm.nominalResistance().toOhms());
-            a[i] = r[i].multiply(new BigDecimal(arm.effectiveGaugeFactor()))
-                    .multiply(new BigDecimal(arm.strainMultiple()));
-        }
-        BigDecimal s12 = r[0].add(r[1]);
-        BigDecimal s34 = r[2].add(r[3]);
-        BigDecimal b12 = a[0].add(a[1]);
-        BigDecimal b34 = a[2].add(a[3]);
-        BigDecimal bigN0 = r[0].multiply(r[2]).subtract(r[1].multiply(r[3]));
-        BigDecimal bigN1 = r[0].multiply(a[2]).add(a[0].multiply(r[2]))
-                .subtract(r[1].multiply(a[3])).subtract(a[1].multiply(r[3]));
-        BigDecimal bigN2 = a[0].multiply(a[2]).subtract(a[1].multiply(a[3]));
-        BigDecimal bigD0 = s12.multiply(s34);
-        BigDecimal bigD1 = s12.multiply(b34).add(b12.multiply(s34));
-        BigDecimal bigD2 = b12.multiply(b34);
-        this.balanced = bigN0.signum() == 0;
+        BigDecimal[] c = expand(arms, armLeads, excitationLeads);
+        this.balanced = c[0].signum() == 0;
+        BigDecimal[] bare = expand(arms, new double[4], 0.0);
+        this.zeroWithoutLeads = bare[0].divide(bare[3], EXACT_ENOUGH).doubleValue();
+        this.slopeWithoutLeads = slopeOf(bare).doubleValue();
 
         // The offset adds to r: (N + offset·D) / D.
         BigDecimal off = new BigDecimal(offset);
-        bigN0 = bigN0.add(off.multiply(bigD0));
-        bigN1 = bigN1.add(off.multiply(bigD1));
-        bigN2 = bigN2.add(off.multiply(bigD2));
-
-        this.n0 = bigN0.divide(bigD0, EXACT_ENOUGH).doubleValue();
-        this.n1 = bigN1.divide(bigD0, EXACT_ENOUGH).doubleValue();
-        this.n2 = bigN2.divide(bigD0, EXACT_ENOUGH).doubleValue();
-        this.d1 = bigD1.divide(bigD0, EXACT_ENOUGH).doubleValue();
-        this.d2 = bigD2.divide(bigD0, EXACT_ENOUGH).doubleValue();
-        BigDecimal bigSlope = bigN1.multiply(bigD0).subtract(bigN0.multiply(bigD1))
-                .divide(bigD0.multiply(bigD0), EXACT_ENOUGH);
+        for (int i = 0; i < 3; i++) {
+            c[i] = c[i].add(off.multiply(c[i + 3]));
+        }
+        BigDecimal d0 = c[3];
+        this.n0 = c[0].divide(d0, EXACT_ENOUGH).doubleValue();
+        this.n1 = c[1].divide(d0, EXACT_ENOUGH).doubleValue();
+        this.n2 = c[2].divide(d0, EXACT_ENOUGH).doubleValue();
+        this.d1 = c[4].divide(d0, EXACT_ENOUGH).doubleValue();
+        this.d2 = c[5].divide(d0, EXACT_ENOUGH).doubleValue();
+        BigDecimal bigSlope = slopeOf(c);
         if (bigSlope.signum() == 0) {
             throw new IllegalArgumentException(
                     "arms must give an output that changes with strain: " + armList(arms));
         }
         this.slope = bigSlope.doubleValue();
         this.rootSign = bigSlope.signum();
-        if (b12.signum() == 0 && b34.signum() == 0) {
+        if (c[2].signum() == 0 && c[4].signum() == 0 && c[5].signum() == 0) {
             this.form = Form.LINEAR;
-        } else if (bigN2.signum() == 0 && bigD2.signum() == 0) {
+        } else if (c[2].signum() == 0 && c[5].signum() == 0) {
             this.form = Form.FIRST_DEGREE;
         } else {
             this.form = Form.QUADRATIC;
         }
 
-        // Physical strains: within the model's limit, every arm resistance positive ...
+        // Physical strains: within the model's limit, every gauge resistance positive ...
         double low = -STRAIN_LIMIT;
         double high = STRAIN_LIMIT;
-        for (int i = 0; i < 4; i++) {
-            double ai = a[i].doubleValue();
-            double edge = -1.0 / (arms[i].effectiveGaugeFactor() * arms[i].strainMultiple());
-            if (ai > 0) {
-                low = Math.max(low, edge);
-            } else if (ai < 0) {
-                high = Math.min(high, edge);
+        for (BridgeArm arm : arms) {
+            double k = arm.effectiveGaugeFactor() * arm.strainMultiple();
+            if (k > 0) {
+                low = Math.max(low, -1.0 / k);
+            } else if (k < 0) {
+                high = Math.min(high, -1.0 / k);
             }
         }
-        // ... and the bridge on its monotonic branch. Each divider Ra/(Ra + Rb) is monotonic with
-        // derivative c/(Ra + Rb)², c = Aa·Rb − Ab·Ra constant; when the two dividers pull
-        // against each other, dr/dε vanishes where √|c12|·(R3 + R4) = √|c43|·(R1 + R2).
-        double c12 = a[0].multiply(r[1]).subtract(a[1].multiply(r[0])).doubleValue();
-        double c43 = a[3].multiply(r[2]).subtract(a[2].multiply(r[3])).doubleValue();
-        if (c12 * rootSign < 0 || -c43 * rootSign < 0) {
-            double q12 = Math.sqrt(Math.abs(c12));
-            double q43 = Math.sqrt(Math.abs(c43));
-            double denominator = q12 * b34.doubleValue() - q43 * b12.doubleValue();
-            double turn = (q43 * s12.doubleValue() - q12 * s34.doubleValue()) / denominator;
-            if (turn > 0 && turn < high) {
-                high = turn;
-            } else if (turn < 0 && turn > low) {
-                low = turn;
+        // ... and the bridge on its monotonic branch: dr/dε = P(ε)/D(ε)², where
+        // P = N'·D − N·D' = (N1·D0 − N0·D1) + 2·(N2·D0 − N0·D2)·ε + (N2·D1 − N1·D2)·ε²
+        // (the cubic terms cancel), keeps its sign between the roots of P nearest to zero.
+        double p0 = c[1].multiply(c[3]).subtract(c[0].multiply(c[4])).doubleValue();
+        double p1 = c[2].multiply(c[3]).subtract(c[0].multiply(c[5])).doubleValue() * 2;
+        double p2 = c[2].multiply(c[4]).subtract(c[1].multiply(c[5])).doubleValue();
+        for (double root : realRoots(p2, p1, p0)) {
+            if (root > 0 && root < high) {
+                high = root;
+            } else if (root < 0 && root > low) {
+                low = root;
             }
         }
         this.strainLow = low;
         this.strainHigh = high;
-        double atLow = offset + dividerDifferenceAt(low, r, a);
-        double atHigh = offset + dividerDifferenceAt(high, r, a);
+        double atLow = offset + readingAt(low);
+        double atHigh = offset + readingAt(high);
         this.ratioLow = rootSign > 0 ? atLow : atHigh;
         this.ratioHigh = rootSign > 0 ? atHigh : atLow;
     }
 
     /**
-     * R1/(R1 + R2) − R4/(R3 + R4) at {@code strain}, an end of the physical range, taking the
-     * limit where a divider's resistances vanish together.
+     * The exact coefficients {N0, N1, N2, D0, D1, D2} of r(ε) = N(ε)/D(ε) for these arms and
+     * leads, not normalised. With Ri = R0i + Li + Ai·ε (Li the lead in series with arm i,
+     * Ai = R0i·Ki·mi), S12 = R1 + R2, S34 = R3 + R4 and Le the two excitation leads together:
+     * <pre>
+     *   N = R1·R3 − R2·R4
+     *   D = S12·S34 + Le·(S12 + S34)
+     * </pre>
+     * The second term of D is the excitation lost in the leads: the bridge, of input resistance
+     * S12·S34/(S12 + S34), sees Vex reduced by the factor Rb/(Rb + Le).
      */
-    private static double dividerDifferenceAt(double strain, BigDecimal[] r, BigDecimal[] a) {
-        BigDecimal e = new BigDecimal(strain);
-        return divider(e, r[0], a[0], r[1], a[1]) - divider(e, r[3], a[3], r[2], a[2]);
+    private static BigDecimal[] expand(BridgeArm[] arms, double[] armLeads,
+            double excitationLeads) {
+        BigDecimal[] r = new BigDecimal[4];
+        BigDecimal[] a = new BigDecimal[4];
+        for (int i = 0; i < 4; i++) {
+            BridgeArm arm = arms[i];
+            BigDecimal nominal = new BigDecimal(arm.nominalResistance().toOhms());
+            r[i] = nominal.add(new BigDecimal(armLeads[i]));
+            a[i] = nominal.multiply(new BigDecimal(arm.effectiveGaugeFactor()))
+                    .multiply(new BigDecimal(arm.strainMultiple()));
+        }
+        BigDecimal le = new BigDecimal(excitationLeads);
+        BigDecimal s12 = r[0].add(r[1]);
+        BigDecimal s34 = r[2].add(r[3]);
+        BigDecimal b12 = a[0].add(a[1]);
+        BigDecimal b34 = a[2].add(a[3]);
+        return new BigDecimal[] {
+            r[0].multiply(r[2]).subtract(r[1].multiply(r[3])),
+            r[0].multiply(a[2]).add(a[0].multiply(r[2]))
+                    .subtract(r[1].multiply(a[3])).subtract(a[1].multiply(r[3])),
+            a[0].multiply(a[2]).subtract(a[1].multiply(a[3])),
+            s12.multiply(s34).add(le.multiply(s12.add(s34))),
+            s12.multiply(b34).add(b12.multiply(s34)).add(le.multiply(b12.add(b34))),
+            b12.multiply(b34)};
     }
 
-    private static double divider(BigDecimal strain, BigDecimal rTop, BigDecimal aTop,
-            BigDecimal rBottom, BigDecimal aBottom) {
-        BigDecimal top = rTop.add(aTop.multiply(strain)).max(BigDecimal.ZERO);
-        BigDecimal sum = top.add(rBottom.add(aBottom.multiply(strain)).max(BigDecimal.ZERO));
-        if (sum.signum() == 0) {
-            top = rTop;
-            sum = rTop.add(rBottom);
+    /** dr/dε at ε = 0 from the coefficients of {@link #expand}: (N1·D0 − N0·D1)/D0². */
+    private static BigDecimal slopeOf(BigDecimal[] c) {
+        return c[1].multiply(c[3]).subtract(c[0].multiply(c[4]))
+                .divide(c[3].multiply(c[3]), EXACT_ENOUGH);
+    }
+
+    /** The real roots of a·x² + b·x + c, by the cancellation-free form; none if a = b = 0. */
+    private static double[] realRoots(double a, double b, double c) {
+        if (a == 0) {
+            return b == 0 ? new double[0] : new double[] {-c / b};
         }
-        return top.divide(sum, EXACT_ENOUGH).doubleValue();
+        double discriminant = b * b - 4 * a * c;
+        if (!(discriminant >= 0)) {
+            return new double[0];
+        }
+        double q = -0.5 * (b + Math.copySign(Math.sqrt(discriminant), b));
+        return q == 0 ? new double[] {0.0} : new double[] {q / a, c / q};
+    }
+
+    /**
+     * The reading (without the offset) at {@code strain}, an end of the physical range, from
+     * the two dividers and the excitation lost in the leads, taking the limit where a divider's
+     * gauges vanish together.
+     */
+    private double readingAt(double strain) {
+        BigDecimal e = new BigDecimal(strain);
+        BigDecimal[] r = new BigDecimal[4];
+        BigDecimal[] rest = new BigDecimal[4];
+        for (int i = 0; i < 4; i++) {
+            BridgeArm arm = arms[i];
+            BigDecimal nominal = new BigDecimal(arm.nominalResistance().toOhms());
+            BigDecimal a = nominal.multiply(new BigDecimal(arm.effectiveGaugeFactor()))
+                    .multiply(new BigDecimal(arm.strainMultiple()));
+            BigDecimal lead = new BigDecimal(armLeads[i]);
+            r[i] = nominal.add(a.multiply(e)).max(BigDecimal.ZERO).add(lead);
+            rest[i] = nominal.add(lead);
+        }
+        BigDecimal s12 = r[0].add(r[1]);
+        BigDecimal s34 = r[2].add(r[3]);
+        BigDecimal divider12 = s12.signum() == 0
+                ? rest[0].divide(rest[0].add(rest[1]), EXACT_ENOUGH)
+                : r[0].divide(s12, EXACT_ENOUGH);
+        BigDecimal divider43 = s34.signum() == 0
+                ? rest[3].divide(rest[2].add(rest[3]), EXACT_ENOUGH)
+                : r[3].divide(s34, EXACT_ENOUGH);
+        BigDecimal reading = divider12.subtract(divider43);
+        if (excitationLeads != 0) {
+            BigDecimal sum = s12.add(s34);
+            BigDecimal input = sum.signum() == 0 ? BigDecimal.ZERO
+                    : s12.multiply(s34).divide(sum, EXACT_ENOUGH);
+            reading = reading.multiply(input)
+                    .divide(input.add(new BigDecimal(excitationLeads)), EXACT_ENOUGH);
+        }
+        return reading.doubleValue();
     }
 
     // ---------------------------------------------------------------- factories
@@ -241,7 +314,7 @@ public final class Bridge {
     public static Bridge of(BridgeArm arm1, BridgeArm arm2, BridgeArm arm3, BridgeArm arm4) {
         return new Bridge("bridge", new BridgeArm[] {
             Objects.requireNonNull(arm1, "arm1"), Objects.requireNonNull(arm2, "arm2"),
-            Objects.requireNonNull(arm3, "arm3"), Objects.requireNonNull(arm4, "arm4")}, 0.0);
+            Objects.requireNonNull(arm3, "arm3"), Objects.requireNonNull(arm4, "arm4")}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -255,7 +328,7 @@ public final class Bridge {
     public static Bridge quarter(StrainGauge gauge) {
         BridgeArm completion = completionFor(gauge);
         return new Bridge("quarter bridge", new BridgeArm[] {
-            BridgeArm.active(gauge, 1), completion, completion, completion}, 0.0);
+            BridgeArm.active(gauge, 1), completion, completion, completion}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -268,7 +341,7 @@ public final class Bridge {
     public static Bridge quarterWithDummy(StrainGauge gauge) {
         BridgeArm completion = completionFor(gauge);
         return new Bridge("quarter bridge with dummy gauge", new BridgeArm[] {
-            BridgeArm.active(gauge, 1), BridgeArm.dummy(gauge), completion, completion}, 0.0);
+            BridgeArm.active(gauge, 1), BridgeArm.dummy(gauge), completion, completion}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -281,7 +354,7 @@ public final class Bridge {
     public static Bridge halfBending(StrainGauge gauge) {
         BridgeArm completion = completionFor(gauge);
         return new Bridge("half bridge, bending", new BridgeArm[] {
-            BridgeArm.active(gauge, 1), BridgeArm.active(gauge, -1), completion, completion}, 0.0);
+            BridgeArm.active(gauge, 1), BridgeArm.active(gauge, -1), completion, completion}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -297,7 +370,7 @@ public final class Bridge {
         BridgeArm completion = completionFor(gauge);
         return new Bridge("half bridge, axial with Poisson gauge", new BridgeArm[] {
             BridgeArm.active(gauge, 1), poissonArm(gauge, -poissonRatio), completion, completion},
-            0.0);
+            NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -310,7 +383,7 @@ public final class Bridge {
     public static Bridge halfOppositeArms(StrainGauge gauge) {
         BridgeArm completion = completionFor(gauge);
         return new Bridge("half bridge, opposite arms", new BridgeArm[] {
-            BridgeArm.active(gauge, 1), completion, BridgeArm.active(gauge, 1), completion}, 0.0);
+            BridgeArm.active(gauge, 1), completion, BridgeArm.active(gauge, 1), completion}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -322,7 +395,7 @@ public final class Bridge {
     public static Bridge fullBending(StrainGauge gauge) {
         return new Bridge("full bridge, bending", new BridgeArm[] {
             BridgeArm.active(gauge, 1), BridgeArm.active(gauge, -1),
-            BridgeArm.active(gauge, 1), BridgeArm.active(gauge, -1)}, 0.0);
+            BridgeArm.active(gauge, 1), BridgeArm.active(gauge, -1)}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -338,7 +411,7 @@ public final class Bridge {
         checkPoissonRatio(poissonRatio);
         return new Bridge("full bridge, axial with Poisson gauges", new BridgeArm[] {
             BridgeArm.active(gauge, 1), poissonArm(gauge, -poissonRatio),
-            BridgeArm.active(gauge, 1), poissonArm(gauge, -poissonRatio)}, 0.0);
+            BridgeArm.active(gauge, 1), poissonArm(gauge, -poissonRatio)}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     /**
@@ -354,7 +427,7 @@ public final class Bridge {
         checkPoissonRatio(poissonRatio);
         return new Bridge("full bridge, bending with Poisson gauges", new BridgeArm[] {
             BridgeArm.active(gauge, 1), BridgeArm.active(gauge, -1),
-            poissonArm(gauge, poissonRatio), poissonArm(gauge, -poissonRatio)}, 0.0);
+            poissonArm(gauge, poissonRatio), poissonArm(gauge, -poissonRatio)}, NO_LEADS.clone(), 0.0, 0.0);
     }
 
     private static BridgeArm completionFor(StrainGauge gauge) {
@@ -401,8 +474,10 @@ public final class Bridge {
                     + VoltageRatio.ofVoltsPerVolt(ratioHigh - offset) + ") of the unzeroed bridge: "
                     + initialReading);
         }
-        double shift = new BigDecimal(reading).subtract(unshiftedZeroOutput()).doubleValue();
-        return new Bridge(arrangement, arms, shift);
+        BigDecimal[] c = expand(arms, armLeads, excitationLeads);
+        double shift = new BigDecimal(reading).subtract(c[0].divide(c[3], EXACT_ENOUGH))
+                .doubleValue();
+        return new Bridge(arrangement, arms, armLeads, excitationLeads, shift);
     }
 
     /**
@@ -427,56 +502,141 @@ public final class Bridge {
     public Bridge zeroedInArm(VoltageRatio initialReading, int arm) {
         Objects.requireNonNull(initialReading, "initialReading");
         Objects.checkIndex(arm - 1, 4);
-        double reading = initialReading.toVoltsPerVolt();
-        BigDecimal r1 = resistanceOf(0);
-        BigDecimal r2 = resistanceOf(1);
-        BigDecimal r3 = resistanceOf(2);
-        BigDecimal r4 = resistanceOf(3);
-        BigDecimal target = new BigDecimal(reading);
-        BigDecimal solved;
-        if (arm <= 2) {
-            // R1/(R1 + R2) must equal t.
-            BigDecimal t = target.add(r4.divide(r3.add(r4), EXACT_ENOUGH));
-            checkFraction(t, initialReading, arm);
-            solved = arm == 1
-                    ? t.multiply(r2).divide(BigDecimal.ONE.subtract(t), EXACT_ENOUGH)
-                    : r1.multiply(BigDecimal.ONE.subtract(t)).divide(t, EXACT_ENOUGH);
-        } else {
-            // R4/(R3 + R4) must equal u.
-            BigDecimal u = r1.divide(r1.add(r2), EXACT_ENOUGH).subtract(target);
-            checkFraction(u, initialReading, arm);
-            solved = arm == 4
-                    ? u.multiply(r3).divide(BigDecimal.ONE.subtract(u), EXACT_ENOUGH)
-                    : r4.multiply(BigDecimal.ONE.subtract(u)).divide(u, EXACT_ENOUGH);
-        }
-        double ohms = solved.doubleValue();
+        // At zero strain N and D are affine in the resistance X of the chosen arm (it appears in
+        // one product of N and in one sum of D), so r0·D(X) = N(X) is solved exactly for X.
+        BigDecimal target = new BigDecimal(initialReading.toVoltsPerVolt());
+        BigDecimal[] at0 = zeroStrainTerms(arm - 1, BigDecimal.ZERO);
+        BigDecimal[] at1 = zeroStrainTerms(arm - 1, BigDecimal.ONE);
+        BigDecimal numerator = target.multiply(at0[1]).subtract(at0[0]);
+        BigDecimal denominator = at1[0].subtract(at0[0])
+                .subtract(target.multiply(at1[1].subtract(at0[1])));
+        double ohms = denominator.signum() == 0 ? Double.NaN
+                : numerator.divide(denominator, EXACT_ENOUGH).doubleValue();
         if (!(ohms > 0) || Double.isInfinite(ohms)) {
             throw new IllegalArgumentException("initialReading cannot be explained by arm " + arm
-                    + " (it would need " + ohms + " Ω): " + initialReading);
+                    + " with a positive resistance: " + initialReading);
         }
         BridgeArm[] changed = arms.clone();
         changed[arm - 1] = arms[arm - 1].withNominalResistance(Resistance.ofOhms(ohms));
-        return new Bridge(arrangement, changed, 0.0);
+        return new Bridge(arrangement, changed, armLeads, excitationLeads, 0.0);
     }
 
-    private static void checkFraction(BigDecimal fraction, VoltageRatio reading, int arm) {
-        if (fraction.signum() <= 0 || fraction.compareTo(BigDecimal.ONE) >= 0) {
-            throw new IllegalArgumentException("initialReading cannot be explained by arm " + arm
-                    + " with a positive resistance: " + reading);
+    /** N and D at zero strain, with the nominal resistance of arm {@code index} set to x. */
+    private BigDecimal[] zeroStrainTerms(int index, BigDecimal x) {
+        BigDecimal[] r = new BigDecimal[4];
+        for (int i = 0; i < 4; i++) {
+            BigDecimal nominal = i == index ? x : new BigDecimal(arms[i].nominalResistance().toOhms());
+            r[i] = nominal.add(new BigDecimal(armLeads[i]));
         }
+        BigDecimal s12 = r[0].add(r[1]);
+        BigDecimal s34 = r[2].add(r[3]);
+        return new BigDecimal[] {r[0].multiply(r[2]).subtract(r[1].multiply(r[3])),
+            s12.multiply(s34).add(new BigDecimal(excitationLeads).multiply(s12.add(s34)))};
     }
 
-    private BigDecimal resistanceOf(int index) {
-        return new BigDecimal(arms[index].nominalResistance().toOhms());
+    // ---------------------------------------------------------------- lead wires
+
+    /**
+     * This bridge with the lead resistance {@code lead} in series with arm {@code arm} (1 to 4),
+     * in place of any lead set there before. The lead is modelled exactly, as a resistance in
+     * the arm that does not change with strain: it lowers the arm's relative change of
+     * resistance and may unbalance the bridge. Set the leads before zeroing.
+     *
+     * @throws NullPointerException      if {@code lead} is null
+     * @throws IndexOutOfBoundsException if {@code arm} is not 1 to 4
+     */
+    public Bridge withLeadInArm(int arm, Resistance lead) {
+        Objects.checkIndex(arm - 1, 4);
+        Objects.requireNonNull(lead, "lead");
+        double[] leads = armLeads.clone();
+        leads[arm - 1] = lead.toOhms();
+        return new Bridge(arrangement, arms, leads, excitationLeads, offset);
     }
 
-    private BigDecimal unshiftedZeroOutput() {
-        BigDecimal r1 = resistanceOf(0);
-        BigDecimal r2 = resistanceOf(1);
-        BigDecimal r3 = resistanceOf(2);
-        BigDecimal r4 = resistanceOf(3);
-        return r1.multiply(r3).subtract(r2.multiply(r4))
-                .divide(r1.add(r2).multiply(r3.add(r4)), EXACT_ENOUGH);
+    /**
+     * This bridge with its active gauge in arm 1 connected by two wires of {@code perLead} each:
+     * both leads are in series with the gauge (2·RL in arm 1), the usual two-wire quarter bridge.
+     * Small-strain sensitivity, relative to no leads (derived from the bridge equation; Window,
+     * <i>Strain Gauge Technology</i>, 2nd ed., ch. 3, gives the first form):
+     * <pre>
+     *   Rg / (Rg + 2·RL)          with the bridge balanced with the leads in circuit
+     *   (Rg / (Rg + RL))²         with the unbalance of the leads left in (zeroed by offset)
+     * </pre>
+     * which agree to first order in RL/Rg; the leads also unbalance the bridge by about
+     * RL/(2·Rg) V/V. Set the leads before zeroing.
+     *
+     * @throws NullPointerException if {@code perLead} is null
+     */
+    public Bridge withTwoWireLeads(Resistance perLead) {
+        Objects.requireNonNull(perLead, "perLead");
+        return withLeadInArm(1, perLead.multipliedBy(2));
+    }
+
+    /**
+     * This bridge with its active gauge in arm 1 connected by three wires of {@code perLead}
+     * each: one lead in series with the gauge (arm 1), one in series with the adjacent
+     * completion arm 2, and the third in the signal line, where no current flows. The lead
+     * resistances cancel in the balance, and the small-strain sensitivity relative to no leads is
+     * exactly (bridge equation; Window, <i>Strain Gauge Technology</i>, 2nd ed., ch. 3)
+     * <pre>
+     *   Rg / (Rg + RL)
+     * </pre>
+     * for equal gauge and completion resistances. The same wiring serves a half bridge whose
+     * arms 1 and 2 are outside the instrument. Set the leads before zeroing.
+     *
+     * @throws NullPointerException if {@code perLead} is null
+     */
+    public Bridge withThreeWireLeads(Resistance perLead) {
+        Objects.requireNonNull(perLead, "perLead");
+        return withLeadInArm(1, perLead).withLeadInArm(2, perLead);
+    }
+
+    /**
+     * This bridge powered through two excitation leads of {@code perLead} each, without remote
+     * sense: the bridge sees the excitation reduced by
+     * <pre>
+     *   Rb / (Rb + 2·RL)        Rb = (R1 + R2)·(R3 + R4) / (R1 + R2 + R3 + R4)
+     * </pre>
+     * and, since Rb changes with strain, the model keeps that change exactly. With remote sense
+     * the instrument holds the excitation at the bridge, which is modelled by leaving the
+     * excitation leads out ({@code Resistance.ZERO}). Replaces any excitation leads set before.
+     *
+     * @throws NullPointerException if {@code perLead} is null
+     */
+    public Bridge withExcitationLeads(Resistance perLead) {
+        Objects.requireNonNull(perLead, "perLead");
+        return new Bridge(arrangement, arms, armLeads, 2 * perLead.toOhms(), offset);
+    }
+
+    /**
+     * The lead resistance in series with arm {@code arm} (1 to 4).
+     *
+     * @throws IndexOutOfBoundsException if {@code arm} is not 1 to 4
+     */
+    public Resistance leadInArm(int arm) {
+        return Resistance.ofOhms(armLeads[Objects.checkIndex(arm - 1, 4)]);
+    }
+
+    /** The resistance of the two excitation leads together (zero with remote sense). */
+    public Resistance excitationLeads() {
+        return Resistance.ofOhms(excitationLeads);
+    }
+
+    /**
+     * The desensitisation by the leads: the small-strain sensitivity of this bridge relative to
+     * the same arms without lead resistance (1 without leads, below 1 with them). The bridge
+     * equations already include it; this figure is for the channel sheet.
+     */
+    public double leadDesensitisation() {
+        return slope / slopeWithoutLeads;
+    }
+
+    /**
+     * The zero offset the leads cause: the output at zero strain of this wiring minus that of
+     * the same arms without leads, before any zeroing.
+     */
+    public VoltageRatio leadZeroOffset() {
+        return VoltageRatio.ofVoltsPerVolt(n0 - offset - zeroWithoutLeads);
     }
 
     // ---------------------------------------------------------------- properties
@@ -838,7 +998,18 @@ public final class Bridge {
     @Override
     public String toString() {
         String zero = offset == 0 ? "" : ", zero offset " + VoltageRatio.ofVoltsPerVolt(offset);
+        StringBuilder leads = new StringBuilder();
+        for (int i = 0; i < 4; i++) {
+            if (armLeads[i] != 0) {
+                leads.append(leads.length() == 0 ? "; leads: " : ", ").append("arm ").append(i + 1)
+                        .append(' ').append(Resistance.ofOhms(armLeads[i]));
+            }
+        }
+        if (excitationLeads != 0) {
+            leads.append(leads.length() == 0 ? "; leads: " : ", ").append("excitation ")
+                    .append(Resistance.ofOhms(excitationLeads));
+        }
         return arrangement + ", " + sensitivity() + " per 1000 µε" + zero + " [" + armList(arms)
-                + "]";
+                + leads + "]";
     }
 }
