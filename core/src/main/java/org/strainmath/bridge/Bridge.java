@@ -711,6 +711,86 @@ public final class Bridge {
         return strainHigh;
     }
 
+    // ---------------------------------------------------------------- excitation
+
+    /**
+     * The power dissipated in the resistor or gauge of arm {@code arm} (not in its lead) at zero
+     * strain, in watts, with {@code excitation} at the instrument's terminals. The bridge sees
+     * Vb = Vex·Rb/(Rb + Le) through the excitation leads; the divider of the arm carries
+     * I = Vb/(its two arms with their leads); the arm dissipates P = I²·R0. At balance a
+     * quarter-bridge gauge sees Vex/2, so P = Vex²/(4·Rg) (common practice, no source).
+     *
+     * @throws NullPointerException      if {@code excitation} is null
+     * @throws IndexOutOfBoundsException if {@code arm} is not 1 to 4
+     */
+    public double powerInArmWatts(int arm, Voltage excitation) {
+        Objects.requireNonNull(excitation, "excitation");
+        Objects.checkIndex(arm - 1, 4);
+        double volts = excitation.toVolts();
+        return volts * volts * powerPerSquareVolt(arm - 1);
+    }
+
+    /**
+     * The largest excitation that keeps every gauge of this bridge (active and dummy, not the
+     * completion resistors) at or below {@code wattsPerGauge} at zero strain. Power grows with
+     * the square of the excitation, so Vmax = min over the gauges of √(Pmax / P(1 V)).
+     *
+     * <p>A power limit protects the gauge and the bond from self-heating drift; the limit is
+     * the gauge maker's or the test standard's, not the library's.
+     *
+     * @throws IllegalArgumentException if {@code wattsPerGauge} is not positive and finite
+     */
+    public Voltage maximumExcitationForPower(double wattsPerGauge) {
+        Checks.positiveFinite(wattsPerGauge, "wattsPerGauge");
+        return maximumExcitation(wattsPerGauge, false);
+    }
+
+    /**
+     * The largest excitation that keeps every gauge at or below the power density
+     * {@code wattsPerSquareMillimetre} over its grid area ({@link StrainGauge#withGridArea}), at
+     * zero strain. Data sheets and handbooks give such densities for gauges on good and on poor
+     * heat sinks; choose the one that fits the substrate.
+     *
+     * @throws IllegalArgumentException if the density is not positive and finite, or a gauge
+     *                                  has no grid area
+     */
+    public Voltage maximumExcitationForPowerDensity(double wattsPerSquareMillimetre) {
+        Checks.positiveFinite(wattsPerSquareMillimetre, "wattsPerSquareMillimetre");
+        for (BridgeArm arm : arms) {
+            if (arm.gauge().isPresent() && !(arm.gauge().get().gridAreaSquareMillimetres() > 0)) {
+                throw new IllegalArgumentException(
+                        "gridArea must be given for every gauge of the bridge: " + arm);
+            }
+        }
+        return maximumExcitation(wattsPerSquareMillimetre, true);
+    }
+
+    private Voltage maximumExcitation(double limit, boolean perSquareMillimetre) {
+        double volts = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < 4; i++) {
+            if (arms[i].gauge().isPresent()) {
+                double watts = perSquareMillimetre
+                        ? limit * arms[i].gauge().get().gridAreaSquareMillimetres() : limit;
+                volts = Math.min(volts, Math.sqrt(watts / powerPerSquareVolt(i)));
+            }
+        }
+        return Voltage.ofVolts(volts);
+    }
+
+    /** The power in arm {@code index} per square volt of excitation, at zero strain. */
+    private double powerPerSquareVolt(int index) {
+        double[] total = new double[4];
+        for (int i = 0; i < 4; i++) {
+            total[i] = arms[i].nominalResistance().toOhms() + armLeads[i];
+        }
+        double s12 = total[0] + total[1];
+        double s34 = total[2] + total[3];
+        double input = s12 * s34 / (s12 + s34);
+        double share = input / (input + excitationLeads);
+        double current = share / (index < 2 ? s12 : s34);
+        return current * current * arms[index].nominalResistance().toOhms();
+    }
+
     // ---------------------------------------------------------------- value API
 
     /**

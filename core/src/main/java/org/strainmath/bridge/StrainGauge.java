@@ -9,7 +9,7 @@ import org.strainmath.quantity.Strain;
 
 /**
  * A metallic strain gauge as its data sheet describes it: nominal (unstrained) resistance, gauge
- * factor and, optionally, transverse sensitivity.
+ * factor and, optionally, transverse sensitivity and active grid area.
  *
  * <p>The gauge obeys the gauge-factor relation (ASTM E251, "gauge factor"; Dally &amp; Riley,
  * <i>Experimental Stress Analysis</i>, 4th ed., eq. 6.5):
@@ -37,12 +37,14 @@ public final class StrainGauge {
     private final Resistance nominalResistance;
     private final double gaugeFactor;
     private final double transverseSensitivity;
+    private final double gridArea;
 
     private StrainGauge(Resistance nominalResistance, double gaugeFactor,
-            double transverseSensitivity) {
+            double transverseSensitivity, double gridArea) {
         this.nominalResistance = nominalResistance;
         this.gaugeFactor = gaugeFactor;
         this.transverseSensitivity = transverseSensitivity;
+        this.gridArea = gridArea;
     }
 
     /**
@@ -57,7 +59,7 @@ public final class StrainGauge {
         Objects.requireNonNull(nominalResistance, "nominalResistance");
         Checks.positiveFinite(nominalResistance.toOhms(), "nominalResistance");
         Checks.positiveFinite(gaugeFactor, "gaugeFactor");
-        return new StrainGauge(nominalResistance, gaugeFactor, 0.0);
+        return new StrainGauge(nominalResistance, gaugeFactor, 0.0, 0.0);
     }
 
     /**
@@ -79,7 +81,7 @@ public final class StrainGauge {
      */
     public StrainGauge withTransverseSensitivity(double kt) {
         Checks.inOpenInterval(kt, -1, 1, "transverseSensitivity");
-        return new StrainGauge(nominalResistance, gaugeFactor, kt + 0.0);
+        return new StrainGauge(nominalResistance, gaugeFactor, kt + 0.0, gridArea);
     }
 
     /**
@@ -92,7 +94,7 @@ public final class StrainGauge {
     public StrainGauge withNominalResistance(Resistance resistance) {
         Objects.requireNonNull(resistance, "resistance");
         Checks.positiveFinite(resistance.toOhms(), "resistance");
-        return new StrainGauge(resistance, gaugeFactor, transverseSensitivity);
+        return new StrainGauge(resistance, gaugeFactor, transverseSensitivity, gridArea);
     }
 
     /**
@@ -102,7 +104,24 @@ public final class StrainGauge {
      */
     public StrainGauge withGaugeFactor(double gaugeFactor) {
         Checks.positiveFinite(gaugeFactor, "gaugeFactor");
-        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity);
+        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity, gridArea);
+    }
+
+    /**
+     * A copy with the active grid area {@code squareMillimetres} (grid length × grid width from
+     * the data sheet), which sets the power the gauge may dissipate for a given power density.
+     *
+     * @throws IllegalArgumentException if the area is not positive and finite
+     */
+    public StrainGauge withGridArea(double squareMillimetres) {
+        Checks.positiveFinite(squareMillimetres, "gridArea");
+        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
+                squareMillimetres);
+    }
+
+    /** The active grid area in mm², or 0 if it was not given. */
+    public double gridAreaSquareMillimetres() {
+        return gridArea;
     }
 
     /** The unstrained resistance. */
@@ -155,12 +174,13 @@ public final class StrainGauge {
         StrainGauge other = (StrainGauge) o;
         return nominalResistance.equals(other.nominalResistance)
                 && Double.compare(gaugeFactor, other.gaugeFactor) == 0
-                && Double.compare(transverseSensitivity, other.transverseSensitivity) == 0;
+                && Double.compare(transverseSensitivity, other.transverseSensitivity) == 0
+                && Double.compare(gridArea, other.gridArea) == 0;
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(nominalResistance, gaugeFactor, transverseSensitivity);
+        return Objects.hash(nominalResistance, gaugeFactor, transverseSensitivity, gridArea);
     }
 
     /** {@code StrainGauge[120.0 Ω, K=2.0]}, with {@code Kt=1.2 %} when set. */
@@ -169,6 +189,8 @@ public final class StrainGauge {
         String kt = transverseSensitivity == 0
                 ? ""
                 : ", Kt=" + Format.withUnit(transverseSensitivity * 100, "%");
-        return "StrainGauge[" + nominalResistance + ", K=" + Format.number(gaugeFactor) + kt + "]";
+        String area = gridArea == 0 ? "" : ", grid " + Format.withUnit(gridArea, "mm²");
+        return "StrainGauge[" + nominalResistance + ", K=" + Format.number(gaugeFactor) + kt + area
+                + "]";
     }
 }
