@@ -22,8 +22,9 @@ import org.strainmath.quantity.Strain;
  *   ε   strain along the grid, m/m, positive in tension
  * </pre>
  * The relation is taken as exact at all strains in this library: the resistance at strain ε is
- * R·(1 + K·ε), which stays positive for ε &gt; −1/K. The transverse sensitivity Kt is stored for
- * the corrections of the signal chain; the bridge equations use K only.
+ * R·(1 + K·ε), which stays positive for ε &gt; −1/K. The bridge equations use K only; the
+ * transverse sensitivity Kt (with the ν0 of the gauge-factor calibration) and the instrument's
+ * gauge-factor setting enter through the corrections below.
  *
  * <pre>
  *   StrainGauge g = StrainGauge.ofOhms(120, 2.0);
@@ -37,13 +38,21 @@ public final class StrainGauge {
     private final Resistance nominalResistance;
     private final double gaugeFactor;
     private final double transverseSensitivity;
+    private final double calibrationPoissonRatio;
     private final double gridArea;
 
+    /**
+     * The Poisson ratio of the calibration beam on which gauge factors are commonly measured,
+     * 0.285 (ASTM E251; common practice).
+     */
+    public static final double DEFAULT_CALIBRATION_POISSON_RATIO = 0.285;
+
     private StrainGauge(Resistance nominalResistance, double gaugeFactor,
-            double transverseSensitivity, double gridArea) {
+            double transverseSensitivity, double calibrationPoissonRatio, double gridArea) {
         this.nominalResistance = nominalResistance;
         this.gaugeFactor = gaugeFactor;
         this.transverseSensitivity = transverseSensitivity;
+        this.calibrationPoissonRatio = calibrationPoissonRatio;
         this.gridArea = gridArea;
     }
 
@@ -59,7 +68,8 @@ public final class StrainGauge {
         Objects.requireNonNull(nominalResistance, "nominalResistance");
         Checks.positiveFinite(nominalResistance.toOhms(), "nominalResistance");
         Checks.positiveFinite(gaugeFactor, "gaugeFactor");
-        return new StrainGauge(nominalResistance, gaugeFactor, 0.0, 0.0);
+        return new StrainGauge(nominalResistance, gaugeFactor, 0.0,
+                DEFAULT_CALIBRATION_POISSON_RATIO, 0.0);
     }
 
     /**
@@ -81,7 +91,8 @@ public final class StrainGauge {
      */
     public StrainGauge withTransverseSensitivity(double kt) {
         Checks.inOpenInterval(kt, -1, 1, "transverseSensitivity");
-        return new StrainGauge(nominalResistance, gaugeFactor, kt + 0.0, gridArea);
+        return new StrainGauge(nominalResistance, gaugeFactor, kt + 0.0, calibrationPoissonRatio,
+                gridArea);
     }
 
     /**
@@ -94,7 +105,8 @@ public final class StrainGauge {
     public StrainGauge withNominalResistance(Resistance resistance) {
         Objects.requireNonNull(resistance, "resistance");
         Checks.positiveFinite(resistance.toOhms(), "resistance");
-        return new StrainGauge(resistance, gaugeFactor, transverseSensitivity, gridArea);
+        return new StrainGauge(resistance, gaugeFactor, transverseSensitivity,
+                calibrationPoissonRatio, gridArea);
     }
 
     /**
@@ -104,7 +116,8 @@ public final class StrainGauge {
      */
     public StrainGauge withGaugeFactor(double gaugeFactor) {
         Checks.positiveFinite(gaugeFactor, "gaugeFactor");
-        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity, gridArea);
+        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
+                calibrationPoissonRatio, gridArea);
     }
 
     /**
@@ -116,12 +129,107 @@ public final class StrainGauge {
     public StrainGauge withGridArea(double squareMillimetres) {
         Checks.positiveFinite(squareMillimetres, "gridArea");
         return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
-                squareMillimetres);
+                calibrationPoissonRatio, squareMillimetres);
     }
 
     /** The active grid area in mm², or 0 if it was not given. */
     public double gridAreaSquareMillimetres() {
         return gridArea;
+    }
+
+    /**
+     * A copy whose gauge factor and transverse sensitivity were measured on a calibration beam
+     * of Poisson ratio {@code poissonRatio} (the data sheet's ν0; 0.285 unless set).
+     *
+     * @throws IllegalArgumentException if {@code poissonRatio} is not in (−1, 0.5)
+     */
+    public StrainGauge withCalibrationPoissonRatio(double poissonRatio) {
+        Checks.inOpenInterval(poissonRatio, -1, 0.5, "poissonRatio");
+        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
+                poissonRatio + 0.0, gridArea);
+    }
+
+    /** The Poisson ratio ν0 of the gauge-factor calibration. */
+    public double calibrationPoissonRatio() {
+        return calibrationPoissonRatio;
+    }
+
+    /**
+     * The strain this gauge indicates (at its own gauge factor) in a field of {@code axial}
+     * strain along the grid and {@code transverse} strain across it. The grid responds as
+     * ΔR/R = Sa·(εa + Kt·εt); the gauge factor was measured where εt = −ν0·εa, so
+     * K = Sa·(1 − ν0·Kt), and (ASTM E251; Dally &amp; Riley, <i>Experimental Stress
+     * Analysis</i>, 4th ed., §6.5)
+     * <pre>
+     *   ε' = (εa + Kt·εt) / (1 − ν0·Kt)
+     * </pre>
+     *
+     * @throws NullPointerException if an argument is null
+     */
+    public Strain indicatedStrain(Strain axial, Strain transverse) {
+        Objects.requireNonNull(axial, "axial");
+        Objects.requireNonNull(transverse, "transverse");
+        return Strain.of((axial.value() + transverseSensitivity * transverse.value())
+                / (1 - calibrationPoissonRatio * transverseSensitivity));
+    }
+
+    /**
+     * The axial strain corrected for transverse sensitivity, from the strain
+     * {@code indicated} by this gauge and the ratio εt/εa of the transverse to the axial strain
+     * (−ν in uniaxial stress on a material of Poisson ratio ν), inverting
+     * {@link #indicatedStrain}:
+     * <pre>
+     *   εa = ε' · (1 − ν0·Kt) / (1 + Kt·εt/εa)
+     * </pre>
+     * The correction vanishes for uniaxial stress on a material whose ν equals ν0.
+     *
+     * @throws NullPointerException     if {@code indicated} is null
+     * @throws IllegalArgumentException if the ratio is not finite or makes the denominator zero
+     */
+    public Strain correctedForTransverse(Strain indicated, double transverseToAxialRatio) {
+        Objects.requireNonNull(indicated, "indicated");
+        Checks.finite(transverseToAxialRatio, "transverseToAxialRatio");
+        double denominator = 1 + transverseSensitivity * transverseToAxialRatio;
+        if (denominator == 0) {
+            throw new IllegalArgumentException("transverseToAxialRatio must not be -1/Kt: "
+                    + transverseToAxialRatio);
+        }
+        return Strain.of(indicated.value() * (1 - calibrationPoissonRatio * transverseSensitivity)
+                / denominator);
+    }
+
+    /**
+     * The axial strain corrected for transverse sensitivity from two gauges of this type at
+     * right angles, {@code indicatedAlong} along the axis and {@code indicatedAcross} across it
+     * (Wu, Experimental Mechanics 2(11), 1962; Dally &amp; Riley, 4th ed., §6.5):
+     * <pre>
+     *   εa = (1 − ν0·Kt) · (ε'a − Kt·ε't) / (1 − Kt²)
+     * </pre>
+     * The transverse strain is the same with the two indicated strains swapped.
+     *
+     * @throws NullPointerException if an argument is null
+     */
+    public Strain correctedForTransverse(Strain indicatedAlong, Strain indicatedAcross) {
+        Objects.requireNonNull(indicatedAlong, "indicatedAlong");
+        Objects.requireNonNull(indicatedAcross, "indicatedAcross");
+        double kt = transverseSensitivity;
+        return Strain.of((1 - calibrationPoissonRatio * kt)
+                * (indicatedAlong.value() - kt * indicatedAcross.value()) / (1 - kt * kt));
+    }
+
+    /**
+     * The strain {@code indicated} by an instrument set to {@code instrumentGaugeFactor},
+     * corrected to this gauge's factor: ε = ε_ind · K_instrument / K_gauge (common practice,
+     * no source), since the instrument divides the same ΔR/R by its own setting.
+     *
+     * @throws NullPointerException     if {@code indicated} is null
+     * @throws IllegalArgumentException if the instrument gauge factor is not positive and finite
+     */
+    public Strain correctedForInstrumentGaugeFactor(Strain indicated,
+            double instrumentGaugeFactor) {
+        Objects.requireNonNull(indicated, "indicated");
+        Checks.positiveFinite(instrumentGaugeFactor, "instrumentGaugeFactor");
+        return Strain.of(indicated.value() * instrumentGaugeFactor / gaugeFactor);
     }
 
     /** The unstrained resistance. */
@@ -175,12 +283,14 @@ public final class StrainGauge {
         return nominalResistance.equals(other.nominalResistance)
                 && Double.compare(gaugeFactor, other.gaugeFactor) == 0
                 && Double.compare(transverseSensitivity, other.transverseSensitivity) == 0
+                && Double.compare(calibrationPoissonRatio, other.calibrationPoissonRatio) == 0
                 && Double.compare(gridArea, other.gridArea) == 0;
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(nominalResistance, gaugeFactor, transverseSensitivity, gridArea);
+        return Objects.hash(nominalResistance, gaugeFactor, transverseSensitivity,
+                calibrationPoissonRatio, gridArea);
     }
 
     /** {@code StrainGauge[120.0 Ω, K=2.0]}, with {@code Kt=1.2 %} when set. */
