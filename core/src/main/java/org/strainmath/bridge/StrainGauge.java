@@ -6,6 +6,7 @@ import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
 import org.strainmath.quantity.Resistance;
 import org.strainmath.quantity.Strain;
+import org.strainmath.quantity.Temperature;
 
 /**
  * A metallic strain gauge as its data sheet describes it: nominal (unstrained) resistance, gauge
@@ -40,6 +41,10 @@ public final class StrainGauge {
     private final double transverseSensitivity;
     private final double calibrationPoissonRatio;
     private final double gridArea;
+    /** Relative change of the gauge factor per kelvin (from %/100 K). */
+    private final double gaugeFactorDrift;
+    /** Temperature at which the gauge factor is given, °C. */
+    private final double gaugeFactorCelsius;
 
     /**
      * The Poisson ratio of the calibration beam on which gauge factors are commonly measured,
@@ -48,13 +53,18 @@ public final class StrainGauge {
     public static final double DEFAULT_CALIBRATION_POISSON_RATIO = 0.285;
 
     private StrainGauge(Resistance nominalResistance, double gaugeFactor,
-            double transverseSensitivity, double calibrationPoissonRatio, double gridArea) {
+            double transverseSensitivity, double calibrationPoissonRatio, double gridArea,
+            double gaugeFactorDrift, double gaugeFactorCelsius) {
         this.nominalResistance = nominalResistance;
         this.gaugeFactor = gaugeFactor;
         this.transverseSensitivity = transverseSensitivity;
         this.calibrationPoissonRatio = calibrationPoissonRatio;
         this.gridArea = gridArea;
+        this.gaugeFactorDrift = gaugeFactorDrift;
+        this.gaugeFactorCelsius = gaugeFactorCelsius;
     }
+
+    private static final double DEFAULT_GAUGE_FACTOR_CELSIUS = 20.0;
 
     /**
      * A gauge of {@code nominalResistance} and {@code gaugeFactor}, with no transverse
@@ -69,7 +79,7 @@ public final class StrainGauge {
         Checks.positiveFinite(nominalResistance.toOhms(), "nominalResistance");
         Checks.positiveFinite(gaugeFactor, "gaugeFactor");
         return new StrainGauge(nominalResistance, gaugeFactor, 0.0,
-                DEFAULT_CALIBRATION_POISSON_RATIO, 0.0);
+                DEFAULT_CALIBRATION_POISSON_RATIO, 0.0, 0.0, DEFAULT_GAUGE_FACTOR_CELSIUS);
     }
 
     /**
@@ -92,7 +102,7 @@ public final class StrainGauge {
     public StrainGauge withTransverseSensitivity(double kt) {
         Checks.inOpenInterval(kt, -1, 1, "transverseSensitivity");
         return new StrainGauge(nominalResistance, gaugeFactor, kt + 0.0, calibrationPoissonRatio,
-                gridArea);
+                gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /**
@@ -106,7 +116,7 @@ public final class StrainGauge {
         Objects.requireNonNull(resistance, "resistance");
         Checks.positiveFinite(resistance.toOhms(), "resistance");
         return new StrainGauge(resistance, gaugeFactor, transverseSensitivity,
-                calibrationPoissonRatio, gridArea);
+                calibrationPoissonRatio, gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /**
@@ -117,7 +127,7 @@ public final class StrainGauge {
     public StrainGauge withGaugeFactor(double gaugeFactor) {
         Checks.positiveFinite(gaugeFactor, "gaugeFactor");
         return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
-                calibrationPoissonRatio, gridArea);
+                calibrationPoissonRatio, gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /**
@@ -129,7 +139,7 @@ public final class StrainGauge {
     public StrainGauge withGridArea(double squareMillimetres) {
         Checks.positiveFinite(squareMillimetres, "gridArea");
         return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
-                calibrationPoissonRatio, squareMillimetres);
+                calibrationPoissonRatio, squareMillimetres, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /** The active grid area in mm², or 0 if it was not given. */
@@ -146,7 +156,7 @@ public final class StrainGauge {
     public StrainGauge withCalibrationPoissonRatio(double poissonRatio) {
         Checks.inOpenInterval(poissonRatio, -1, 0.5, "poissonRatio");
         return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
-                poissonRatio + 0.0, gridArea);
+                poissonRatio + 0.0, gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /** The Poisson ratio ν0 of the gauge-factor calibration. */
@@ -232,6 +242,46 @@ public final class StrainGauge {
         return Strain.of(indicated.value() * instrumentGaugeFactor / gaugeFactor);
     }
 
+    /**
+     * A copy whose gauge factor, given at {@code reference}, changes with temperature by
+     * {@code percentPer100Kelvin} % per 100 K, as data sheets state it:
+     * <pre>
+     *   K(T) = K · (1 + (c / 100) · (T − Tref) / 100 K)
+     * </pre>
+     * (common practice, no source). The other settings of the gauge are kept; the gauge
+     * factor of a copy changed later with {@link #withGaugeFactor} is taken at the same
+     * reference.
+     *
+     * @throws NullPointerException     if {@code reference} is null
+     * @throws IllegalArgumentException if the coefficient is not finite
+     */
+    public StrainGauge withGaugeFactorTemperatureCoefficient(double percentPer100Kelvin,
+            Temperature reference) {
+        Checks.finite(percentPer100Kelvin, "percentPer100Kelvin");
+        Objects.requireNonNull(reference, "reference");
+        return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
+                calibrationPoissonRatio, gridArea, percentPer100Kelvin / 1e4,
+                reference.toCelsius());
+    }
+
+    /**
+     * The gauge factor at {@code temperature}, by the law of
+     * {@link #withGaugeFactorTemperatureCoefficient} (the gauge factor itself without one).
+     *
+     * @throws NullPointerException     if {@code temperature} is null
+     * @throws IllegalArgumentException if the law gives no positive gauge factor there
+     */
+    public double gaugeFactorAt(Temperature temperature) {
+        Objects.requireNonNull(temperature, "temperature");
+        double k = gaugeFactor * (1 + gaugeFactorDrift * (temperature.toCelsius()
+                - gaugeFactorCelsius));
+        if (!(k > 0)) {
+            throw new IllegalArgumentException(
+                    "temperature must keep the gauge factor positive: " + temperature);
+        }
+        return k;
+    }
+
     /** The unstrained resistance. */
     public Resistance nominalResistance() {
         return nominalResistance;
@@ -284,13 +334,15 @@ public final class StrainGauge {
                 && Double.compare(gaugeFactor, other.gaugeFactor) == 0
                 && Double.compare(transverseSensitivity, other.transverseSensitivity) == 0
                 && Double.compare(calibrationPoissonRatio, other.calibrationPoissonRatio) == 0
-                && Double.compare(gridArea, other.gridArea) == 0;
+                && Double.compare(gridArea, other.gridArea) == 0
+                && Double.compare(gaugeFactorDrift, other.gaugeFactorDrift) == 0
+                && Double.compare(gaugeFactorCelsius, other.gaugeFactorCelsius) == 0;
     }
 
     @Override
     public int hashCode() {
         return Objects.hash(nominalResistance, gaugeFactor, transverseSensitivity,
-                calibrationPoissonRatio, gridArea);
+                calibrationPoissonRatio, gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /** {@code StrainGauge[120.0 Ω, K=2.0]}, with {@code Kt=1.2 %} when set. */

@@ -12,6 +12,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.strainmath.quantity.Strain;
+import org.strainmath.quantity.Temperature;
 
 /** Transverse sensitivity and gauge-factor mismatch corrections of a single gauge. */
 class GaugeCorrectionsTest {
@@ -93,5 +94,30 @@ class GaugeCorrectionsTest {
         assertThatThrownBy(() -> GAUGE.correctedForInstrumentGaugeFactor(null, 2))
                 .isInstanceOf(NullPointerException.class).hasMessage("indicated");
         assertThat(GAUGE.withCalibrationPoissonRatio(0.3)).isNotEqualTo(GAUGE);
+    }
+
+    @Test
+    void theGaugeFactorFollowsItsTemperatureCoefficient() {
+        // Data-sheet form (common practice, no source): +1.1 %/100 K from 2.10 at 23 °C gives
+        // 2.10·(1 + 0.011·77/100) at 100 °C, and 2.10·(1 − 0.011·0.73) at −50 °C.
+        StrainGauge gauge = GAUGE.withGaugeFactorTemperatureCoefficient(1.1, Temperature.ofCelsius(23));
+        assertThat(gauge.gaugeFactorAt(Temperature.ofCelsius(100)))
+                .isCloseTo(2.1 * (1 + 0.011 * 0.77), within(1e-14));
+        assertThat(gauge.gaugeFactorAt(Temperature.ofCelsius(-50)))
+                .isCloseTo(2.1 * (1 - 0.011 * 0.73), within(1e-14));
+        assertThat(gauge.gaugeFactorAt(Temperature.ofCelsius(23))).isCloseTo(2.1, within(1e-15));
+        assertThat(GAUGE.gaugeFactorAt(Temperature.ofCelsius(150))).isEqualTo(2.1);
+        // Copies keep the coefficient.
+        assertThat(gauge.withTransverseSensitivity(0.01).gaugeFactorAt(Temperature.ofCelsius(100)))
+                .isEqualTo(gauge.gaugeFactorAt(Temperature.ofCelsius(100)));
+        assertThat(gauge).isNotEqualTo(GAUGE);
+        assertThatThrownBy(() -> GAUGE.withGaugeFactorTemperatureCoefficient(Double.NaN,
+                Temperature.ofCelsius(23))).hasMessage("percentPer100Kelvin must be finite: NaN");
+        assertThatThrownBy(() -> GAUGE.withGaugeFactorTemperatureCoefficient(1, null))
+                .isInstanceOf(NullPointerException.class).hasMessage("reference");
+        assertThatThrownBy(() -> GAUGE.withGaugeFactorTemperatureCoefficient(-50,
+                Temperature.ofCelsius(0)).gaugeFactorAt(Temperature.ofCelsius(300)))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessage("temperature must keep the gauge factor positive: 300.0 °C");
     }
 }
