@@ -152,6 +152,26 @@ public final class AdcInput {
         return new AdcInput(bits, coding, gain, fullScale, excitationVolts, codes + 0.0);
     }
 
+    /** The composed scale: V/V per code. */
+    double scale() {
+        return scale;
+    }
+
+    /** The composed offset: V/V at code 0. */
+    double offset() {
+        return offset;
+    }
+
+    /** The lowest code of the range (a rail). */
+    double lowCode() {
+        return lowCode;
+    }
+
+    /** The highest code of the range (a rail). */
+    double highCode() {
+        return highCode;
+    }
+
     /** Whether the converter's reference follows the excitation. */
     public boolean isRatiometric() {
         return Double.isNaN(excitationVolts);

@@ -891,14 +891,29 @@ public final class Bridge {
      * {@link #toStrain(double[], int, double[], int, int)}, bit for bit. Never throws.
      */
     public double toStrain(double ratio) {
+        return toStrainWithin(ratio, ratioLow, ratioHigh);
+    }
+
+    /** The inverse with the physical reading interval narrowed to (low, high), for channels. */
+    double toStrainWithin(double ratio, double low, double high) {
         switch (form) {
             case LINEAR:
-                return inverseLinear(ratio, n0, n1, ratioLow, ratioHigh);
+                return inverseLinear(ratio, n0, n1, low, high);
             case FIRST_DEGREE:
-                return inverseFirstDegree(ratio, n0, n1, d1, ratioLow, ratioHigh);
+                return inverseFirstDegree(ratio, n0, n1, d1, low, high);
             default:
-                return inverseQuadratic(ratio, n0, n1, n2, d1, d2, rootSign, ratioLow, ratioHigh);
+                return inverseQuadratic(ratio, n0, n1, n2, d1, d2, rootSign, low, high);
         }
+    }
+
+    /** The lower end of the open interval of physical readings (V/V). */
+    double ratioLow() {
+        return ratioLow;
+    }
+
+    /** The upper end of the open interval of physical readings (V/V). */
+    double ratioHigh() {
+        return ratioHigh;
     }
 
     /**
@@ -918,56 +933,62 @@ public final class Bridge {
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            switch (form) {
-                case LINEAR:
-                    inverseLinearBlock(from, dst, start, stop);
-                    break;
-                case FIRST_DEGREE:
-                    inverseFirstDegreeBlock(from, dst, start, stop);
-                    break;
-                default:
-                    inverseQuadraticBlock(from, dst, start, stop);
-                    break;
-            }
+            toStrainWithin(from, dst, start, stop, ratioLow, ratioHigh);
             nan += Kernels.countNaN(dst, start, stop - start);
         }
         return nan;
+    }
+
+    /**
+     * Converts from[start, end) into dst[start, end) with the reading interval (low, high):
+     * the loop of {@link #toStrain(double[], int, double[], int, int)}, for channels.
+     */
+    void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
+            double high) {
+        switch (form) {
+            case LINEAR:
+                inverseLinearBlock(from, dst, start, end, low, high);
+                break;
+            case FIRST_DEGREE:
+                inverseFirstDegreeBlock(from, dst, start, end, low, high);
+                break;
+            default:
+                inverseQuadraticBlock(from, dst, start, end, low, high);
+                break;
+        }
     }
 
     // Blocks run in chunks of Kernels.CHUNK samples, so that the NaN count reads what the loop
     // has just written while it is still in cache. One small method per loop, each reading and
     // writing at one index, so that C2 compiles and vectorises each loop on its own.
 
-    private void inverseLinearBlock(double[] from, double[] dst, int start, int end) {
+    private void inverseLinearBlock(double[] from, double[] dst, int start, int end,
+            double low, double high) {
         final double c0 = n0;
         final double c1 = n1;
-        final double low = ratioLow;
-        final double high = ratioHigh;
         for (int i = start; i < end; i++) {
             dst[i] = inverseLinear(from[i], c0, c1, low, high);
         }
     }
 
-    private void inverseFirstDegreeBlock(double[] from, double[] dst, int start, int end) {
+    private void inverseFirstDegreeBlock(double[] from, double[] dst, int start, int end,
+            double low, double high) {
         final double c0 = n0;
         final double c1 = n1;
         final double e1 = d1;
-        final double low = ratioLow;
-        final double high = ratioHigh;
         for (int i = start; i < end; i++) {
             dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high);
         }
     }
 
-    private void inverseQuadraticBlock(double[] from, double[] dst, int start, int end) {
+    private void inverseQuadraticBlock(double[] from, double[] dst, int start, int end,
+            double low, double high) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
         final double e1 = d1;
         final double e2 = d2;
         final double sign = rootSign;
-        final double low = ratioLow;
-        final double high = ratioHigh;
         for (int i = start; i < end; i++) {
             dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
         }

@@ -259,6 +259,18 @@ public final class ThermalOutput {
             return Kernels.countNaN(dst, dstOff, len);
         }
 
+        /** Corrects dst[start, end) in place with the temperatures at the same indices. */
+        void correctInPlace(double[] dst, double[] celsius, int celsiusShift, int start, int end) {
+            final double c0 = q0;
+            final double c1 = q1;
+            final double c2 = q2;
+            final double c3 = q3;
+            final double c4 = q4;
+            for (int i = start; i < end; i++) {
+                dst[i] = apply(dst[i], celsius[i + celsiusShift], c0, c1, c2, c3, c4);
+            }
+        }
+
         private static double apply(double strain, double t, double c0, double c1, double c2,
                 double c3, double c4) {
             return strain - (c0 + t * (c1 + t * (c2 + t * (c3 + t * c4))));

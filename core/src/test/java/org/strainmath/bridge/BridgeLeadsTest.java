@@ -21,23 +21,9 @@ class BridgeLeadsTest {
     private static final StrainGauge GAUGE = StrainGauge.ofOhms(350, 2.0);
     private static final Resistance TWO_OHMS = Resistance.ofOhms(2);
 
-    /**
-     * Oracle: the two dividers with the leads in the arms, times the share of the excitation that
-     * reaches the bridge, Rb/(Rb + Le), all in 50-digit BigDecimal from the arm resistances.
-     */
+    /** Oracle: {@link ExactBridge#wiredRatio}, 50 digits from the arm and lead resistances. */
     private static BigDecimal exact(Bridge bridge, double strain) {
-        BigDecimal[] r = new BigDecimal[4];
-        for (int i = 0; i < 4; i++) {
-            r[i] = ExactBridge.armResistance(bridge.arm(i + 1), strain)
-                    .add(new BigDecimal(bridge.leadInArm(i + 1).toOhms()));
-        }
-        BigDecimal s12 = r[0].add(r[1]);
-        BigDecimal s34 = r[2].add(r[3]);
-        BigDecimal dividers = r[0].divide(s12, ExactBridge.DIGITS_50)
-                .subtract(r[3].divide(s34, ExactBridge.DIGITS_50));
-        BigDecimal rb = s12.multiply(s34).divide(s12.add(s34), ExactBridge.DIGITS_50);
-        BigDecimal le = new BigDecimal(bridge.excitationLeads().toOhms());
-        return dividers.multiply(rb).divide(rb.add(le), ExactBridge.DIGITS_50);
+        return ExactBridge.wiredRatio(bridge, strain);
     }
 
     @Test

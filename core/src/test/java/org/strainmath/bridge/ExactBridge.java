@@ -33,4 +33,22 @@ final class ExactBridge {
         return r1.multiply(r3).subtract(r2.multiply(r4))
                 .divide(r1.add(r2).multiply(r3.add(r4)), DIGITS_50);
     }
+
+    /**
+     * The reading of a wired bridge: the two dividers with the leads in the arms, times the
+     * share Rb/(Rb + Le) of the excitation that reaches the bridge, in 50 digits.
+     */
+    static BigDecimal wiredRatio(Bridge bridge, double strain) {
+        BigDecimal[] r = new BigDecimal[4];
+        for (int i = 0; i < 4; i++) {
+            r[i] = armResistance(bridge.arm(i + 1), strain)
+                    .add(new BigDecimal(bridge.leadInArm(i + 1).toOhms()));
+        }
+        BigDecimal s12 = r[0].add(r[1]);
+        BigDecimal s34 = r[2].add(r[3]);
+        BigDecimal dividers = r[0].divide(s12, DIGITS_50).subtract(r[3].divide(s34, DIGITS_50));
+        BigDecimal rb = s12.multiply(s34).divide(s12.add(s34), DIGITS_50);
+        BigDecimal le = new BigDecimal(bridge.excitationLeads().toOhms());
+        return dividers.multiply(rb).divide(rb.add(le), DIGITS_50);
+    }
 }

@@ -1,0 +1,326 @@
+package org.strainmath.bridge;
+
+import java.util.Objects;
+
+import org.strainmath.internal.Checks;
+import org.strainmath.internal.Format;
+import org.strainmath.internal.Kernels;
+import org.strainmath.quantity.Strain;
+import org.strainmath.quantity.Temperature;
+import org.strainmath.quantity.VoltageRatio;
+
+/**
+ * A measurement channel as it is wired: a bridge (gauge, arrangement, leads, excitation leads,
+ * zero), the converter input that reads it, and the corrections of the gauge, converting raw
+ * codes to corrected strain.
+ *
+ * <pre>
+ *   r  = code · scale + offset                        converter ({@link AdcInput})
+ *   ε' = exact inverse of the bridge equation at r    bridge ({@link Bridge})
+ *   ε  = f · ε' − (q(T) − q(T0))                       transverse factor f, thermal output q
+ * </pre>
+ * Everything constant is composed when the channel is built: one scale and offset, the bridge's
+ * coefficients, one open interval of readings that are both inside the converter's range
+ * (rails excluded) and physical for the bridge, one transverse factor and one quartic in °C.
+ * Per sample only that arithmetic runs; a code with no physical strain gives NaN.
+ *
+ * <pre>
+ *   StrainChannel channel = StrainChannel.of(
+ *           Bridge.quarter(gauge).withThreeWireLeads(Resistance.ofOhms(0.8)),
+ *           AdcInput.ratiometric(24, 128));
+ *   channel.strainAt(1_048_576);      // the strain of one code
+ *   channel.toStrain(codes, 0, strain, 0, codes.length);   // a block
+ * </pre>
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class StrainChannel {
+
+    private final Bridge bridge;
+    private final AdcInput input;
+    private final double transverseRatio;        // NaN unless set
+    private final double transverseFactor;       // 1 unless set
+    private final ThermalOutput thermalOutput;   // null unless set
+    private final Temperature zeroTemperature;   // null unless set
+    private final ThermalOutput.Correction thermal;
+
+    private final double scale;
+    private final double offset;
+    private final double low;
+    private final double high;
+
+    private StrainChannel(Bridge bridge, AdcInput input, double transverseRatio,
+            ThermalOutput thermalOutput, Temperature zeroTemperature) {
+        this.bridge = bridge;
+        this.input = input;
+        this.transverseRatio = transverseRatio;
+        this.thermalOutput = thermalOutput;
+        this.zeroTemperature = zeroTemperature;
+        this.scale = input.scale();
+        this.offset = input.offset();
+        // Readings inside the converter's range (rails excluded) and physical for the bridge.
+        this.low = Math.max(bridge.ratioLow(), input.lowCode() * scale + offset);
+        this.high = Math.min(bridge.ratioHigh(), input.highCode() * scale + offset);
+        StrainGauge gauge = firstActiveGauge(bridge);
+        this.transverseFactor = Double.isNaN(transverseRatio) ? 1.0
+                : (1 - gauge.calibrationPoissonRatio() * gauge.transverseSensitivity())
+                        / (1 + gauge.transverseSensitivity() * transverseRatio);
+        this.thermal = thermalOutput == null ? null
+                : thermalOutput.zeroedAt(zeroTemperature, bridge.gaugeFactor());
+    }
+
+    private static StrainGauge firstActiveGauge(Bridge bridge) {
+        for (int arm = 1; arm <= 4; arm++) {
+            if (bridge.arm(arm).isActive()) {
+                return bridge.arm(arm).gauge().orElseThrow();
+            }
+        }
+        throw new AssertionError("a bridge has an active arm");
+    }
+
+    /**
+     * The channel of {@code bridge} read through {@code input}, with no corrections.
+     *
+     * @throws NullPointerException if an argument is null
+     */
+    public static StrainChannel of(Bridge bridge, AdcInput input) {
+        Objects.requireNonNull(bridge, "bridge");
+        Objects.requireNonNull(input, "input");
+        return new StrainChannel(bridge, input, Double.NaN, null, null);
+    }
+
+    /**
+     * A copy corrected for the transverse sensitivity of its gauges (their Kt and ν0), for a
+     * known ratio of transverse to axial strain at the gauges (−ν in uniaxial stress), by
+     * {@link StrainGauge#correctedForTransverse(Strain, double)}. Exact when every active gauge
+     * lies along the measured strain (quarter, bending and opposite-arm arrangements); an
+     * arrangement with Poisson gauges is refused, since each of its gauges sees another
+     * transverse strain.
+     *
+     * @throws IllegalArgumentException if the ratio is not finite, the bridge has Poisson
+     *                                  gauges, or its active gauges differ in Kt or ν0
+     */
+    public StrainChannel withTransverseCorrection(double transverseToAxialRatio) {
+        Checks.finite(transverseToAxialRatio, "transverseToAxialRatio");
+        StrainGauge first = firstActiveGauge(bridge);
+        for (int arm = 1; arm <= 4; arm++) {
+            BridgeArm a = bridge.arm(arm);
+            if (!a.isActive()) {
+                continue;
+            }
+            StrainGauge g = a.gauge().orElseThrow();
+            if (Math.abs(a.strainMultiple()) != 1
+                    || g.transverseSensitivity() != first.transverseSensitivity()
+                    || g.calibrationPoissonRatio() != first.calibrationPoissonRatio()) {
+                throw new IllegalArgumentException("bridge must have its active gauges along the"
+                        + " measured strain, all of one kind, for a transverse correction: "
+                        + bridge);
+            }
+        }
+        if (1 + first.transverseSensitivity() * transverseToAxialRatio == 0) {
+            throw new IllegalArgumentException("transverseToAxialRatio must not be -1/Kt: "
+                    + transverseToAxialRatio);
+        }
+        return new StrainChannel(bridge, input, transverseToAxialRatio + 0.0, thermalOutput,
+                zeroTemperature);
+    }
+
+    /**
+     * A copy corrected for the thermal output {@code curve} of its gauge, relative to
+     * {@code zeroTemperature}, the temperature at which the channel was zeroed, and scaled to
+     * the bridge's gauge factor. Conversions then need the temperature of each sample.
+     *
+     * @throws NullPointerException if an argument is null
+     */
+    public StrainChannel withThermalOutput(ThermalOutput curve, Temperature zeroTemperature) {
+        Objects.requireNonNull(curve, "curve");
+        Objects.requireNonNull(zeroTemperature, "zeroTemperature");
+        return new StrainChannel(bridge, input, transverseRatio, curve, zeroTemperature);
+    }
+
+    /**
+     * A copy zeroed by offset at the reading {@code code} of the unstrained channel
+     * ({@link Bridge#zeroedByOffset}).
+     *
+     * @throws IllegalArgumentException if the code has no reading or no physical strain
+     */
+    public StrainChannel zeroedByOffsetAt(long code) {
+        return withBridge(bridge.zeroedByOffset(zeroReading(code)));
+    }
+
+    /**
+     * A copy zeroed exactly at the reading {@code code} of the unstrained channel, attributing
+     * the unbalance to arm {@code arm} ({@link Bridge#zeroedInArm}).
+     *
+     * @throws IndexOutOfBoundsException if {@code arm} is not 1 to 4
+     * @throws IllegalArgumentException  if the code has no reading, or the arm cannot explain it
+     */
+    public StrainChannel zeroedInArmAt(long code, int arm) {
+        return withBridge(bridge.zeroedInArm(zeroReading(code), arm));
+    }
+
+    private VoltageRatio zeroReading(long code) {
+        double ratio = input.toRatio(code);
+        if (ratio != ratio) {
+            throw new IllegalArgumentException("code must be inside the converter's range, rails"
+                    + " excluded: " + code);
+        }
+        return VoltageRatio.ofVoltsPerVolt(ratio);
+    }
+
+    private StrainChannel withBridge(Bridge zeroed) {
+        return new StrainChannel(zeroed, input, transverseRatio, thermalOutput, zeroTemperature);
+    }
+
+    /** The bridge of this channel. */
+    public Bridge bridge() {
+        return bridge;
+    }
+
+    /** The converter input of this channel. */
+    public AdcInput input() {
+        return input;
+    }
+
+    /** Whether conversions need a temperature per sample (a thermal output is set). */
+    public boolean needsTemperature() {
+        return thermal != null;
+    }
+
+    // ---------------------------------------------------------------- value API
+
+    /**
+     * The corrected strain of one {@code code}.
+     *
+     * @throws IllegalStateException    if the channel needs a temperature
+     * @throws IllegalArgumentException if the code has no physical strain
+     */
+    public Strain strainAt(long code) {
+        checkNoTemperatureNeeded();
+        return checked(toStrain(code), code);
+    }
+
+    /**
+     * The corrected strain of one {@code code} read at {@code temperature}.
+     *
+     * @throws NullPointerException     if {@code temperature} is null
+     * @throws IllegalArgumentException if the code has no physical strain
+     */
+    public Strain strainAt(long code, Temperature temperature) {
+        Objects.requireNonNull(temperature, "temperature");
+        return checked(toStrain(code, temperature.toCelsius()), code);
+    }
+
+    private static Strain checked(double strain, long code) {
+        if (strain != strain) {
+            throw new IllegalArgumentException("code must give a physical strain (inside the"
+                    + " converter's range and the bridge's): " + code);
+        }
+        return Strain.of(strain);
+    }
+
+    private void checkNoTemperatureNeeded() {
+        if (thermal != null) {
+            throw new IllegalStateException(
+                    "the channel corrects for thermal output: give the temperatures");
+        }
+    }
+
+    // ---------------------------------------------------------------- kernels
+
+    /**
+     * The corrected strain (m/m) of {@code code}; NaN if it has none. The same function as the
+     * block method, bit for bit. Never throws; without temperatures the thermal correction, if
+     * set, is not applied (use {@link #toStrain(long, double)}).
+     */
+    public double toStrain(long code) {
+        return bridge.toStrainWithin(code * scale + offset, low, high) * transverseFactor;
+    }
+
+    /**
+     * The corrected strain (m/m) of {@code code} read at {@code celsius} °C. The same function
+     * as the block method, bit for bit. Never throws.
+     */
+    public double toStrain(long code, double celsius) {
+        double strain = toStrain(code);
+        return thermal == null ? strain : thermal.correct(strain, celsius);
+    }
+
+    /**
+     * Converts {@code len} codes from {@code codes[codesOff...]} to corrected strains (m/m) in
+     * {@code dst[dstOff...]}. Allocation-free.
+     *
+     * @return the number of outputs set to NaN
+     * @throws IllegalStateException     if the channel needs temperatures
+     * @throws NullPointerException      if an array is null
+     * @throws IndexOutOfBoundsException if a range is outside its array
+     */
+    public int toStrain(int[] codes, int codesOff, double[] dst, int dstOff, int len) {
+        checkNoTemperatureNeeded();
+        return convert(codes, codesOff, null, 0, dst, dstOff, len);
+    }
+
+    /**
+     * Converts {@code len} codes with the temperature of each sample in °C,
+     * {@code celsius[celsiusOff...]}, to corrected strains (m/m). Allocation-free.
+     *
+     * @return the number of outputs set to NaN
+     * @throws NullPointerException      if an array is null
+     * @throws IndexOutOfBoundsException if a range is outside its array
+     */
+    public int toStrain(int[] codes, int codesOff, double[] celsius, int celsiusOff,
+            double[] dst, int dstOff, int len) {
+        Objects.requireNonNull(celsius, "celsius");
+        Objects.checkFromIndexSize(celsiusOff, len, celsius.length);
+        return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len);
+    }
+
+    private int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff,
+            double[] dst, int dstOff, int len) {
+        Objects.requireNonNull(codes, "codes");
+        Objects.requireNonNull(dst, "dst");
+        Objects.checkFromIndexSize(codesOff, len, codes.length);
+        Objects.checkFromIndexSize(dstOff, len, dst.length);
+        final double s = scale;
+        final double o = offset;
+        for (int i = 0; i < len; i++) {
+            dst[dstOff + i] = codes[codesOff + i] * s + o;
+        }
+        int nan = 0;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int stop = start + Math.min(Kernels.CHUNK, len - done);
+            bridge.toStrainWithin(dst, dst, start, stop, low, high);
+            if (transverseFactor != 1.0) {
+                scaleInPlace(dst, start, stop, transverseFactor);
+            }
+            if (thermal != null && celsius != null) {
+                thermal.correctInPlace(dst, celsius, celsiusOff - dstOff, start, stop);
+            }
+            nan += Kernels.countNaN(dst, start, stop - start);
+        }
+        return nan;
+    }
+
+    private static void scaleInPlace(double[] a, int start, int end, double factor) {
+        for (int i = start; i < end; i++) {
+            a[i] = a[i] * factor;
+        }
+    }
+
+    /** The channel sheet: bridge, converter, corrections, resolution. */
+    @Override
+    public String toString() {
+        StringBuilder text = new StringBuilder("StrainChannel[").append(bridge).append("; ")
+                .append(input);
+        if (!Double.isNaN(transverseRatio)) {
+            text.append("; transverse correction at εt/εa = ").append(Format.number(transverseRatio))
+                    .append(" (×").append(Format.number(transverseFactor)).append(')');
+        }
+        if (thermal != null) {
+            text.append("; ").append(thermalOutput).append(" zeroed at ").append(zeroTemperature);
+        }
+        return text.append("; ").append(input.strainPerCode(bridge)).append(" per code]")
+                .toString();
+    }
+}

@@ -1,0 +1,159 @@
+package org.strainmath.bridge;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.SplittableRandom;
+
+import org.junit.jupiter.api.Test;
+import org.strainmath.quantity.Resistance;
+import org.strainmath.quantity.Strain;
+import org.strainmath.quantity.Temperature;
+
+/** Whole channels: codes to corrected strain, on an invented channel of our own. */
+class StrainChannelTest {
+
+    private static final StrainGauge GAUGE = StrainGauge.ofOhms(350, 2.1).withTransverseSensitivity(0.015);
+    private static final Bridge WIRED = Bridge.quarter(GAUGE).withThreeWireLeads(Resistance.ofOhms(1.5))
+            .withExcitationLeads(Resistance.ofOhms(0.5));
+    private static final AdcInput ADC = AdcInput.ratiometric(24, 128);
+    private static final int ZERO_CODE = 3000;
+
+    /**
+     * Oracle: the strain whose exact wired reading (ExactBridge.wiredRatio, 50 digits) plus the
+     * zero shift equals the code's ratio, found by bisection; independent of the library's
+     * composed coefficients and root formula.
+     */
+    private static double oracleStrain(double ratio, double shift) {
+        double lo = -0.05;
+        double hi = 0.05;
+        for (int i = 0; i < 200 && lo < hi; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (mid == lo || mid == hi) {
+                break;
+            }
+            if (ExactBridge.wiredRatio(WIRED, mid).doubleValue() + shift < ratio) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    @Test
+    void codesConvertToTheExactStrainThroughTheWholeChain() {
+        // Whole-chain check of the signal-chain issue: 24-bit codes back to strain to 1e-9.
+        StrainChannel channel = StrainChannel.of(WIRED, ADC).zeroedByOffsetAt(ZERO_CODE);
+        double shift = ADC.toRatio(ZERO_CODE) - ExactBridge.wiredRatio(WIRED, 0).doubleValue();
+        for (int code : new int[] {-2_000_000, -1000, ZERO_CODE + 5, 40_000, 1_500_000, 4_000_000}) {
+            double expected = oracleStrain(ADC.toRatio(code), shift);
+            assertThat(channel.toStrain(code)).as("code %d", code)
+                    .isCloseTo(expected, within(Math.abs(expected) * 1e-9 + 1e-17));
+        }
+        assertThat(channel.toStrain(ZERO_CODE)).isCloseTo(0.0, within(1e-17));
+    }
+
+    @Test
+    void correctionsApplyInOrderAndTheBlockIsTheScalarBitForBit() {
+        ThermalOutput curve = ThermalOutput.ofCelsius(-30, 2.1, -0.045, 1.5e-4);
+        StrainChannel channel = StrainChannel.of(WIRED, ADC).zeroedInArmAt(ZERO_CODE, 1)
+                .withTransverseCorrection(-0.3)
+                .withThermalOutput(curve, Temperature.ofCelsius(21));
+        // Transverse factor (1 − ν0·Kt)/(1 + Kt·ρ) (StrainGauge.correctedForTransverse).
+        double factor = (1 - 0.285 * 0.015) / (1 - 0.015 * 0.3);
+        StrainChannel plain = StrainChannel.of(WIRED, ADC).zeroedInArmAt(ZERO_CODE, 1);
+        double thermal = curve.apparentStrainAt(Temperature.ofCelsius(60), 2.1).value()
+                - curve.apparentStrainAt(Temperature.ofCelsius(21), 2.1).value();
+        assertThat(channel.toStrain(900_000, 60.0))
+                .isCloseTo(plain.toStrain(900_000) * factor - thermal, within(1e-15));
+
+        SplittableRandom random = new SplittableRandom(3);
+        int n = 5000;
+        int[] codes = new int[n];
+        double[] celsius = new double[n];
+        for (int i = 0; i < n; i++) {
+            codes[i] = random.nextInt(-(1 << 23), 1 << 23);
+            celsius[i] = random.nextDouble(-20, 120);
+        }
+        codes[10] = (1 << 23) - 1;
+        codes[11] = -(1 << 23);
+        double[] out = new double[n + 3];
+        int nan = channel.toStrain(codes, 0, celsius, 0, out, 3, n);
+        double[] expected = new double[n];
+        int expectedNaN = 0;
+        for (int i = 0; i < n; i++) {
+            expected[i] = channel.toStrain(codes[i], celsius[i]);
+            expectedNaN += Double.isNaN(expected[i]) ? 1 : 0;
+        }
+        assertThat(java.util.Arrays.copyOfRange(out, 3, n + 3)).isEqualTo(expected);
+        assertThat(nan).isEqualTo(expectedNaN).isGreaterThanOrEqualTo(2);
+        assertThat(channel.strainAt(900_000, Temperature.ofCelsius(60)).value())
+                .isEqualTo(channel.toStrain(900_000, 60.0));
+    }
+
+    @Test
+    void aChannelWithoutCorrectionsIsTheConverterThenTheBridge() {
+        StrainChannel channel = StrainChannel.of(WIRED, ADC);
+        int[] codes = {0, 123_456, -654_321};
+        double[] out = new double[3];
+        assertThat(channel.toStrain(codes, 0, out, 0, 3)).isZero();
+        // Equal to the two steps within a few ulp: the channel's reading interval is the
+        // intersection of the converter's and the bridge's, so its mask rounds differently.
+        for (int i = 0; i < 3; i++) {
+            double twoSteps = WIRED.toStrain(ADC.toRatio(codes[i]));
+            assertThat(out[i]).isCloseTo(twoSteps, within(Math.abs(twoSteps) * 1e-15));
+        }
+        assertThat(channel.strainAt(123_456)).isEqualTo(Strain.of(out[1]));
+        assertThat(channel.needsTemperature()).isFalse();
+        assertThat(channel.bridge()).isSameAs(WIRED);
+        assertThat(channel.input()).isSameAs(ADC);
+    }
+
+    @Test
+    void misuseIsRefusedWithAReason() {
+        StrainChannel thermal = StrainChannel.of(WIRED, ADC)
+                .withThermalOutput(ThermalOutput.ofCelsius(1, 1), Temperature.ofCelsius(20));
+        assertThat(thermal.needsTemperature()).isTrue();
+        assertThatThrownBy(() -> thermal.strainAt(1000))
+                .isInstanceOf(IllegalStateException.class)
+                .hasMessage("the channel corrects for thermal output: give the temperatures");
+        assertThatThrownBy(() -> thermal.toStrain(new int[1], 0, new double[1], 0, 1))
+                .isInstanceOf(IllegalStateException.class);
+        StrainChannel plain = StrainChannel.of(WIRED, ADC);
+        assertThatThrownBy(() -> plain.strainAt((1 << 23) - 1))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessage("code must give a physical strain (inside the converter's range and"
+                        + " the bridge's): 8388607");
+        assertThatThrownBy(() -> plain.zeroedByOffsetAt(1L << 30))
+                .hasMessage("code must be inside the converter's range, rails excluded: 1073741824");
+        assertThatThrownBy(() -> StrainChannel.of(Bridge.fullAxialPoisson(GAUGE, 0.3), ADC)
+                .withTransverseCorrection(-0.3))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessageStartingWith("bridge must have its active gauges along the measured strain");
+        assertThatThrownBy(() -> plain.withTransverseCorrection(Double.NaN))
+                .hasMessage("transverseToAxialRatio must be finite: NaN");
+        assertThatThrownBy(() -> StrainChannel.of(null, ADC))
+                .isInstanceOf(NullPointerException.class).hasMessage("bridge");
+        assertThatThrownBy(() -> StrainChannel.of(WIRED, null))
+                .isInstanceOf(NullPointerException.class).hasMessage("input");
+        assertThatThrownBy(() -> plain.toStrain(new int[2], 0, new double[1], 0, new double[2], 0, 2))
+                .isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> plain.toStrain(null, 0, new double[1], 0, 1))
+                .isInstanceOf(NullPointerException.class).hasMessage("codes");
+    }
+
+    @Test
+    void theChannelSheetNamesEveryPiece() {
+        StrainChannel channel = StrainChannel.of(WIRED, ADC).withTransverseCorrection(-0.3)
+                .withThermalOutput(ThermalOutput.ofCelsius(-30, 2.1), Temperature.ofCelsius(21));
+        assertThat(channel.toString())
+                .startsWith("StrainChannel[quarter bridge")
+                .contains("leads: arm 1 1.5 Ω, arm 2 1.5 Ω, excitation 1.0 Ω")
+                .contains("AdcInput[24 bits")
+                .contains("transverse correction at εt/εa = -0.3")
+                .contains("ThermalOutput[-30.0 + 2.1·T µε, T in °C, at K=2.0] zeroed at 21.0 °C")
+                .endsWith("µε per code]");
+    }
+}
