@@ -266,8 +266,15 @@ public final class ThermalOutput {
             final double c2 = q2;
             final double c3 = q3;
             final double c4 = q4;
-            for (int i = start; i < end; i++) {
-                dst[i] = apply(dst[i], celsius[i + celsiusShift], c0, c1, c2, c3, c4);
+            if (celsiusShift == 0) {
+                // One index for both arrays, so that C2 vectorises the loop (see Kernels).
+                for (int i = start; i < end; i++) {
+                    dst[i] = apply(dst[i], celsius[i], c0, c1, c2, c3, c4);
+                }
+            } else {
+                for (int i = start; i < end; i++) {
+                    dst[i] = apply(dst[i], celsius[i + celsiusShift], c0, c1, c2, c3, c4);
+                }
             }
         }
 
