@@ -286,6 +286,26 @@ public final class StrainChannel {
         for (int i = 0; i < len; i++) {
             dst[dstOff + i] = codes[codesOff + i] * s + o;
         }
+        return finish(dst, dstOff, len, celsius, celsiusOff);
+    }
+
+    /**
+     * Converts column {@code column} of {@code frameCount} interleaved frames of
+     * {@code channelsPerFrame} codes each, starting at {@code framesOff}, into
+     * {@code dst[dstOff...]}; for {@link ChannelFrames}, which has checked the ranges.
+     */
+    int convertColumn(int[] frames, int framesOff, int channelsPerFrame, int column,
+            double[] celsiusPerFrame, int celsiusOff, double[] dst, int dstOff, int frameCount) {
+        final double s = scale;
+        final double o = offset;
+        for (int i = 0, k = framesOff + column; i < frameCount; i++, k += channelsPerFrame) {
+            dst[dstOff + i] = frames[k] * s + o;
+        }
+        return finish(dst, dstOff, frameCount, celsiusPerFrame, celsiusOff);
+    }
+
+    /** The bridge inverse, the transverse factor and the thermal correction, in place. */
+    private int finish(double[] dst, int dstOff, int len, double[] celsius, int celsiusOff) {
         int nan = 0;
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;

@@ -1,0 +1,121 @@
+package org.strainmath.bridge;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * A multi-channel input that delivers interleaved frames: frame i holds one code per channel,
+ * {@code frames[i·N + c]} for column c of N. Each column has its own configured
+ * {@link StrainChannel}; a conversion writes one block of strains per channel.
+ *
+ * <pre>
+ *   ChannelFrames frames = ChannelFrames.of(rodA, rodB, gusset);      // 3 codes per frame
+ *   double[][] strain = new double[3][blockFrames];
+ *   int bad = frames.toStrain(codes, strain);                          // codes.length = 3·blockFrames
+ * </pre>
+ *
+ * <p>Immutable and thread-safe; conversions allocate nothing.
+ */
+public final class ChannelFrames {
+
+    private final StrainChannel[] channels;
+
+    private ChannelFrames(StrainChannel[] channels) {
+        this.channels = channels;
+    }
+
+    /**
+     * Frames of {@code channels.length} codes, column c converted by {@code channels[c]}.
+     *
+     * @throws NullPointerException     if the array or a channel is null
+     * @throws IllegalArgumentException if there is no channel
+     */
+    public static ChannelFrames of(StrainChannel... channels) {
+        Objects.requireNonNull(channels, "channels");
+        if (channels.length == 0) {
+            throw new IllegalArgumentException("channels must hold at least one channel: 0");
+        }
+        StrainChannel[] copy = channels.clone();
+        for (int c = 0; c < copy.length; c++) {
+            Objects.requireNonNull(copy[c], "channels[" + c + "]");
+        }
+        return new ChannelFrames(copy);
+    }
+
+    /** The number of codes in one frame. */
+    public int channelsPerFrame() {
+        return channels.length;
+    }
+
+    /** The channels, column by column. */
+    public List<StrainChannel> channels() {
+        return List.copyOf(Arrays.asList(channels));
+    }
+
+    /**
+     * Converts all of {@code frames}, a whole number of frames, into {@code dst[c][0...]}, one
+     * row per channel.
+     *
+     * @return the number of outputs set to NaN, over all channels
+     * @throws IllegalArgumentException  if {@code frames.length} is not a whole number of frames
+     * @throws IllegalStateException     if a channel needs temperatures
+     * @throws NullPointerException      if an array or a row is null
+     * @throws IndexOutOfBoundsException if {@code dst} has too few rows or a row is too short
+     */
+    public int toStrain(int[] frames, double[][] dst) {
+        Objects.requireNonNull(frames, "frames");
+        int n = channels.length;
+        if (frames.length % n != 0) {
+            throw new IllegalArgumentException("frames.length must be a whole number of frames of "
+                    + n + " channels: " + frames.length);
+        }
+        return toStrain(frames, 0, frames.length / n, null, 0, dst, 0);
+    }
+
+    /**
+     * Converts {@code frameCount} frames from {@code frames[framesOff...]} into
+     * {@code dst[c][dstOff...]}, with one temperature per frame in °C from
+     * {@code celsiusPerFrame[celsiusOff...]} for the channels that correct for thermal output
+     * ({@code null} if none does).
+     *
+     * @return the number of outputs set to NaN, over all channels
+     * @throws IllegalStateException     if a channel needs temperatures and none are given
+     * @throws NullPointerException      if {@code frames}, {@code dst} or a row is null
+     * @throws IndexOutOfBoundsException if a range is outside its array
+     */
+    public int toStrain(int[] frames, int framesOff, int frameCount, double[] celsiusPerFrame,
+            int celsiusOff, double[][] dst, int dstOff) {
+        Objects.requireNonNull(frames, "frames");
+        Objects.requireNonNull(dst, "dst");
+        int n = channels.length;
+        Objects.checkFromIndexSize(framesOff, Math.multiplyExact(frameCount, n), frames.length);
+        Objects.checkFromIndexSize(0, n, dst.length);
+        if (celsiusPerFrame != null) {
+            Objects.checkFromIndexSize(celsiusOff, frameCount, celsiusPerFrame.length);
+        }
+        for (int c = 0; c < n; c++) {
+            if (dst[c] == null) {
+                // Not Objects.requireNonNull(x, message): that would build the message each call.
+                throw new NullPointerException("dst[" + c + "]");
+            }
+            Objects.checkFromIndexSize(dstOff, frameCount, dst[c].length);
+            if (channels[c].needsTemperature() && celsiusPerFrame == null) {
+                throw new IllegalStateException("channel " + c
+                        + " corrects for thermal output: give the temperatures");
+            }
+        }
+        int nan = 0;
+        for (int c = 0; c < n; c++) {
+            nan += channels[c].convertColumn(frames, framesOff, n, c, celsiusPerFrame, celsiusOff,
+                    dst[c], dstOff, frameCount);
+        }
+        return nan;
+    }
+
+    /** {@code ChannelFrames[3 channels per frame]}. */
+    @Override
+    public String toString() {
+        return "ChannelFrames[" + channels.length + " channels per frame]";
+    }
+}
