@@ -172,6 +172,11 @@ public final class AdcInput {
         return highCode;
     }
 
+    /** Whether codes are offset binary (unsigned, zero at mid-range). */
+    boolean isOffsetBinary() {
+        return coding == Coding.OFFSET_BINARY;
+    }
+
     /** Whether the converter's reference follows the excitation. */
     public boolean isRatiometric() {
         return Double.isNaN(excitationVolts);
@@ -259,7 +264,7 @@ public final class AdcInput {
         final double o = offset;
         final double low = lowCode;
         final double high = highCode;
-        final int mask = coding == Coding.OFFSET_BINARY ? 0xFFFF : -1;
+        final int mask = isOffsetBinary() ? 0xFFFF : -1;
         for (int i = 0; i < len; i++) {
             dst[dstOff + i] = ratio(src[srcOff + i] & mask, s, o, low, high);
         }

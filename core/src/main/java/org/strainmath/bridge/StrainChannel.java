@@ -275,6 +275,31 @@ public final class StrainChannel {
         return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len);
     }
 
+    /**
+     * Converts {@code len} 16-bit codes from {@code codes[codesOff...]}, read as the converter
+     * writes them (unsigned for offset binary), to corrected strains (m/m). Allocation-free;
+     * the same function as {@link #toStrain(long)} of the code's value.
+     *
+     * @return the number of outputs set to NaN
+     * @throws IllegalStateException     if the channel needs temperatures
+     * @throws NullPointerException      if an array is null
+     * @throws IndexOutOfBoundsException if a range is outside its array
+     */
+    public int toStrain(short[] codes, int codesOff, double[] dst, int dstOff, int len) {
+        checkNoTemperatureNeeded();
+        Objects.requireNonNull(codes, "codes");
+        Objects.requireNonNull(dst, "dst");
+        Objects.checkFromIndexSize(codesOff, len, codes.length);
+        Objects.checkFromIndexSize(dstOff, len, dst.length);
+        final double s = scale;
+        final double o = offset;
+        final int mask = input.isOffsetBinary() ? 0xFFFF : -1;
+        for (int i = 0; i < len; i++) {
+            dst[dstOff + i] = (codes[codesOff + i] & mask) * s + o;
+        }
+        return finish(dst, dstOff, len, null, 0);
+    }
+
     private int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff,
             double[] dst, int dstOff, int len) {
         Objects.requireNonNull(codes, "codes");

@@ -140,7 +140,7 @@ class StrainChannelTest {
                 .isInstanceOf(NullPointerException.class).hasMessage("input");
         assertThatThrownBy(() -> plain.toStrain(new int[2], 0, new double[1], 0, new double[2], 0, 2))
                 .isInstanceOf(IndexOutOfBoundsException.class);
-        assertThatThrownBy(() -> plain.toStrain(null, 0, new double[1], 0, 1))
+        assertThatThrownBy(() -> plain.toStrain((int[]) null, 0, new double[1], 0, 1))
                 .isInstanceOf(NullPointerException.class).hasMessage("codes");
     }
 
@@ -155,5 +155,40 @@ class StrainChannelTest {
                 .contains("transverse correction at εt/εa = -0.3")
                 .contains("ThermalOutput[-30.0 + 2.1·T µε, T in °C, at K=2.0] zeroed at 21.0 °C")
                 .endsWith("µε per code]");
+    }
+
+    @Test
+    void sixteenBitWordsConvertLikeTheirCodes() {
+        AdcInput sixteen = AdcInput.ratiometric(16, 64).withCoding(AdcInput.Coding.OFFSET_BINARY);
+        StrainChannel channel = StrainChannel.of(WIRED, sixteen);
+        short[] words = {(short) 32768, (short) 40000, (short) 65535, (short) 1000};
+        double[] out = new double[4];
+        assertThat(channel.toStrain(words, 0, out, 0, 4)).isEqualTo(1);
+        assertThat(out[0]).isEqualTo(channel.toStrain(32768));
+        assertThat(out[1]).isEqualTo(channel.toStrain(40000));
+        assertThat(out[2]).isNaN();   // the rail
+        assertThat(out[3]).isEqualTo(channel.toStrain(1000));
+        assertThat(out[0]).isCloseTo(0.0, within(1e-6));
+    }
+
+    static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> thermalCases() {
+        SplittableRandom random = new SplittableRandom(0x7E);
+        return java.util.stream.Stream.generate(() -> org.junit.jupiter.params.provider.Arguments.of(
+                random.nextDouble(-50, 200), random.nextDouble(-50, 200),
+                random.nextDouble(1.8, 4.5), random.nextDouble(-3e-3, 3e-3))).limit(100);
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest(name = "T0={0} T={1} K={2} e={3}")
+    @org.junit.jupiter.params.provider.MethodSource("thermalCases")
+    void thermalCorrectionUndoesItsForwardModel(double zeroCelsius, double celsius, double k,
+            double strain) {
+        // Forward model (ThermalOutput class comment): the channel reads the true strain plus
+        // (εapp(T) − εapp(T0))·2.00/K; the correction must give the true strain back.
+        ThermalOutput curve = ThermalOutput.ofCelsius(-30, 2.1, -0.045, 1.5e-4, -2e-7);
+        double apparent = (curve.apparentStrainAt(Temperature.ofCelsius(celsius)).value()
+                - curve.apparentStrainAt(Temperature.ofCelsius(zeroCelsius)).value()) * 2.0 / k;
+        ThermalOutput.Correction correction = curve.zeroedAt(Temperature.ofCelsius(zeroCelsius), k);
+        assertThat(correction.correct(strain + apparent, celsius))
+                .isCloseTo(strain, within(1e-12));
     }
 }
