@@ -17,7 +17,8 @@ import org.strainmath.quantity.VoltageRatio;
  * <pre>
  *   r  = code · scale + offset                        converter ({@link AdcInput})
  *   ε' = exact inverse of the bridge equation at r    bridge ({@link Bridge})
- *   ε  = f · ε' − (q(T) − q(T0))                       transverse factor f, thermal output q
+ *   ε  = (f · ε' − (q(T) − q(T0))) · K / K(T)          transverse factor f, thermal output q,
+ *                                                     gauge factor K(T) at the temperature
  * </pre>
  * Everything constant is composed when the channel is built: one scale and offset, the bridge's
  * coefficients, one open interval of readings that are both inside the converter's range
@@ -43,6 +44,9 @@ public final class StrainChannel {
     private final ThermalOutput thermalOutput;   // null unless set
     private final Temperature zeroTemperature;   // null unless set
     private final ThermalOutput.Correction thermal;
+    /** Relative gauge-factor change per kelvin of the active gauges, and its reference, °C. */
+    private final double drift;
+    private final double driftCelsius;
 
     private final double scale;
     private final double offset;
@@ -67,6 +71,8 @@ public final class StrainChannel {
                         / (1 + gauge.transverseSensitivity() * transverseRatio);
         this.thermal = thermalOutput == null ? null
                 : thermalOutput.zeroedAt(zeroTemperature, bridge.gaugeFactor());
+        this.drift = thermal == null ? 0.0 : gauge.gaugeFactorDriftPerKelvin();
+        this.driftCelsius = gauge.gaugeFactorReferenceCelsius();
     }
 
     private static StrainGauge firstActiveGauge(Bridge bridge) {
@@ -128,7 +134,14 @@ public final class StrainChannel {
     /**
      * A copy corrected for the thermal output {@code curve} of its gauge, relative to
      * {@code zeroTemperature}, the temperature at which the channel was zeroed, and scaled to
-     * the bridge's gauge factor. Conversions then need the temperature of each sample.
+     * the bridge's gauge factor. Conversions then need the temperature of each sample, and a
+     * gauge-factor temperature coefficient of the gauges
+     * ({@link StrainGauge#withGaugeFactorTemperatureCoefficient}) is applied as well:
+     * <pre>
+     *   ε = (f·ε' − (q(T) − q(T0))) · K / K(T)
+     * </pre>
+     * exact for the bridge, whose equation depends on K·ε only, when all active gauges share the
+     * coefficient.
      *
      * @throws NullPointerException if an argument is null
      */
@@ -243,7 +256,20 @@ public final class StrainChannel {
      */
     public double toStrain(long code, double celsius) {
         double strain = toStrain(code);
-        return thermal == null ? strain : thermal.correct(strain, celsius);
+        if (thermal == null) {
+            return strain;
+        }
+        return gaugeFactorAt(thermal.correct(strain, celsius), celsius, drift, driftCelsius);
+    }
+
+    /**
+     * ε·K/K(T) = ε / (1 + c·(T − Tref)): the bridge equation depends on K·ε only, so a gauge
+     * factor that follows temperature rescales the strain exactly when all active gauges share
+     * it.
+     */
+    private static double gaugeFactorAt(double strain, double celsius, double drift,
+            double reference) {
+        return strain / (1.0 + drift * (celsius - reference));
     }
 
     /**
@@ -341,10 +367,28 @@ public final class StrainChannel {
             }
             if (thermal != null && celsius != null) {
                 thermal.correctInPlace(dst, celsius, celsiusOff - dstOff, start, stop);
+                if (drift != 0.0) {
+                    gaugeFactorInPlace(dst, celsius, celsiusOff - dstOff, start, stop);
+                }
             }
             nan += Kernels.countNaN(dst, start, stop - start);
         }
         return nan;
+    }
+
+    private void gaugeFactorInPlace(double[] dst, double[] celsius, int shift, int start,
+            int end) {
+        final double c = drift;
+        final double reference = driftCelsius;
+        if (shift == 0) {
+            for (int i = start; i < end; i++) {
+                dst[i] = gaugeFactorAt(dst[i], celsius[i], c, reference);
+            }
+        } else {
+            for (int i = start; i < end; i++) {
+                dst[i] = gaugeFactorAt(dst[i], celsius[i + shift], c, reference);
+            }
+        }
     }
 
     private static void scaleInPlace(double[] a, int start, int end, double factor) {

@@ -282,6 +282,16 @@ public final class StrainGauge {
         return k;
     }
 
+    /** The relative change of the gauge factor per kelvin (0 unless set). */
+    double gaugeFactorDriftPerKelvin() {
+        return gaugeFactorDrift;
+    }
+
+    /** The temperature in °C at which the gauge factor is given. */
+    double gaugeFactorReferenceCelsius() {
+        return gaugeFactorCelsius;
+    }
+
     /** The unstrained resistance. */
     public Resistance nominalResistance() {
         return nominalResistance;

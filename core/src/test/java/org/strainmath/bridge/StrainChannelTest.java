@@ -191,4 +191,33 @@ class StrainChannelTest {
         assertThat(correction.correct(strain + apparent, celsius))
                 .isCloseTo(strain, within(1e-12));
     }
+
+    @Test
+    void aTemperatureDependentGaugeFactorRescalesTheStrainExactly() {
+        // Oracle: a bridge built with the gauge factor the coefficient gives at 120 °C reads the
+        // same code as the strain K(T)/K times smaller: the bridge equation depends on K·ε only
+        // (arms R0·(1 + K·m·ε)), so the channel's rescaling must match that bridge to 1e-13.
+        StrainGauge drifting = GAUGE.withGaugeFactorTemperatureCoefficient(1.2, Temperature.ofCelsius(23));
+        double hotK = drifting.gaugeFactorAt(Temperature.ofCelsius(120));
+        ThermalOutput flat = ThermalOutput.ofCelsius(0.0);
+        StrainChannel channel = StrainChannel.of(Bridge.quarter(drifting).withThreeWireLeads(
+                Resistance.ofOhms(1.5)), ADC).withThermalOutput(flat, Temperature.ofCelsius(23));
+        Bridge hot = Bridge.quarter(GAUGE.withGaugeFactor(hotK)).withThreeWireLeads(Resistance.ofOhms(1.5));
+        for (int code : new int[] {-900_000, 70_000, 2_000_000}) {
+            double expected = hot.toStrain(ADC.toRatio(code));
+            assertThat(channel.toStrain(code, 120.0))
+                    .isCloseTo(expected, within(Math.abs(expected) * 1e-13));
+            double atReference = Bridge.quarter(GAUGE).withThreeWireLeads(Resistance.ofOhms(1.5))
+                    .toStrain(ADC.toRatio(code));
+            assertThat(channel.toStrain(code, 23.0))
+                    .isCloseTo(atReference, within(Math.abs(atReference) * 1e-13));
+        }
+        int[] codes = {-900_000, 70_000, 2_000_000};
+        double[] celsius = {120, 23, 60};
+        double[] out = new double[3];
+        channel.toStrain(codes, 0, celsius, 0, out, 0, 3);
+        for (int i = 0; i < 3; i++) {
+            assertThat(out[i]).isEqualTo(channel.toStrain(codes[i], celsius[i]));
+        }
+    }
 }
