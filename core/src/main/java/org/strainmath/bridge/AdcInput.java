@@ -232,10 +232,7 @@ public final class AdcInput {
      * @throws IndexOutOfBoundsException if a range is outside its array
      */
     public int toRatio(int[] src, int srcOff, double[] dst, int dstOff, int len) {
-        Objects.requireNonNull(src, "src");
-        Objects.requireNonNull(dst, "dst");
-        Objects.checkFromIndexSize(srcOff, len, src.length);
-        Objects.checkFromIndexSize(dstOff, len, dst.length);
+        Checks.block(Objects.requireNonNull(src, "src").length, srcOff, dst, dstOff, len);
         final double s = scale;
         final double o = offset;
         final double low = lowCode;
@@ -256,10 +253,7 @@ public final class AdcInput {
      * @throws IndexOutOfBoundsException if a range is outside its array
      */
     public int toRatio(short[] src, int srcOff, double[] dst, int dstOff, int len) {
-        Objects.requireNonNull(src, "src");
-        Objects.requireNonNull(dst, "dst");
-        Objects.checkFromIndexSize(srcOff, len, src.length);
-        Objects.checkFromIndexSize(dstOff, len, dst.length);
+        Checks.block(Objects.requireNonNull(src, "src").length, srcOff, dst, dstOff, len);
         final double s = scale;
         final double o = offset;
         final double low = lowCode;

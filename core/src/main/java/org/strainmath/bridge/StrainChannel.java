@@ -313,10 +313,7 @@ public final class StrainChannel {
      */
     public int toStrain(short[] codes, int codesOff, double[] dst, int dstOff, int len) {
         checkNoTemperatureNeeded();
-        Objects.requireNonNull(codes, "codes");
-        Objects.requireNonNull(dst, "dst");
-        Objects.checkFromIndexSize(codesOff, len, codes.length);
-        Objects.checkFromIndexSize(dstOff, len, dst.length);
+        Checks.block(Objects.requireNonNull(codes, "codes").length, codesOff, dst, dstOff, len);
         final double s = scale;
         final double o = offset;
         final int mask = input.isOffsetBinary() ? 0xFFFF : -1;
@@ -328,10 +325,7 @@ public final class StrainChannel {
 
     private int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff,
             double[] dst, int dstOff, int len) {
-        Objects.requireNonNull(codes, "codes");
-        Objects.requireNonNull(dst, "dst");
-        Objects.checkFromIndexSize(codesOff, len, codes.length);
-        Objects.checkFromIndexSize(dstOff, len, dst.length);
+        Checks.block(Objects.requireNonNull(codes, "codes").length, codesOff, dst, dstOff, len);
         final double s = scale;
         final double o = offset;
         for (int i = 0; i < len; i++) {

@@ -86,9 +86,20 @@ public final class Checks {
      * @throws IndexOutOfBoundsException if a range is out of bounds or {@code len} is negative
      */
     public static void block(double[] src, int srcOff, double[] dst, int dstOff, int len) {
-        Objects.requireNonNull(src, "src");
+        block(Objects.requireNonNull(src, "src").length, srcOff, dst, dstOff, len);
+    }
+
+    /**
+     * Checks the arguments of a block kernel whose source is an array of any type, given by its
+     * length (the caller checks it for null first, naming it): {@code dst} non-null and both
+     * ranges inside their arrays.
+     *
+     * @throws NullPointerException if {@code dst} is null
+     * @throws IndexOutOfBoundsException if a range is out of bounds or {@code len} is negative
+     */
+    public static void block(int srcLength, int srcOff, double[] dst, int dstOff, int len) {
         Objects.requireNonNull(dst, "dst");
-        Objects.checkFromIndexSize(srcOff, len, src.length);
+        Objects.checkFromIndexSize(srcOff, len, srcLength);
         Objects.checkFromIndexSize(dstOff, len, dst.length);
     }
 }
