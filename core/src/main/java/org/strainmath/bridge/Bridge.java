@@ -940,49 +940,81 @@ public final class Bridge {
     }
 
     /**
-     * Converts from[start, end) into dst[start, end) with the reading interval (low, high):
-     * the loop of {@link #toStrain(double[], int, double[], int, int)}, for channels.
+     * Converts from[start, end) into dst[start, end) with the reading interval (low, high),
+     * each strain multiplied by {@code factor}: the loop of
+     * {@link #toStrain(double[], int, double[], int, int)} (factor 1, which changes no bit),
+     * for channels.
      */
     void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
-            double high) {
+            double high, double factor) {
         switch (form) {
             case LINEAR:
-                inverseLinearBlock(from, dst, start, end, low, high);
+                inverseLinearBlock(from, dst, start, end, low, high, factor);
                 break;
             case FIRST_DEGREE:
-                inverseFirstDegreeBlock(from, dst, start, end, low, high);
+                inverseFirstDegreeBlock(from, dst, start, end, low, high, factor);
                 break;
             default:
-                inverseQuadraticBlock(from, dst, start, end, low, high);
+                inverseQuadraticBlock(from, dst, start, end, low, high, factor);
+                break;
+        }
+    }
+
+    void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
+            double high) {
+        toStrainWithin(from, dst, start, end, low, high, 1.0);
+    }
+
+    /**
+     * Converts converter codes {@code codes[start + shift, end + shift)} into strains in
+     * dst[start, end) in one loop: {@code toStrainWithin(code·scale + offset, low, high)·factor}
+     * per sample, bit for bit the scalar function of a channel. An {@code int[]} cannot alias
+     * the output, so the two indices do not stop C2 from vectorising the loop.
+     */
+    void codesToStrainWithin(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double low, double high, double factor) {
+        switch (form) {
+            case LINEAR:
+                codesLinearBlock(codes, shift, scale, offset, dst, start, end, low, high,
+                        factor);
+                break;
+            case FIRST_DEGREE:
+                codesFirstDegreeBlock(codes, shift, scale, offset, dst, start, end, low, high,
+                        factor);
+                break;
+            default:
+                codesQuadraticBlock(codes, shift, scale, offset, dst, start, end, low, high,
+                        factor);
                 break;
         }
     }
 
     // Blocks run in chunks of Kernels.CHUNK samples, so that the NaN count reads what the loop
     // has just written while it is still in cache. One small method per loop, each reading and
-    // writing at one index, so that C2 compiles and vectorises each loop on its own.
+    // writing double arrays at one index, so that C2 compiles and vectorises each loop on its
+    // own.
 
     private void inverseLinearBlock(double[] from, double[] dst, int start, int end,
-            double low, double high) {
+            double low, double high, double factor) {
         final double c0 = n0;
         final double c1 = n1;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseLinear(from[i], c0, c1, low, high);
+            dst[i] = inverseLinear(from[i], c0, c1, low, high) * factor;
         }
     }
 
     private void inverseFirstDegreeBlock(double[] from, double[] dst, int start, int end,
-            double low, double high) {
+            double low, double high, double factor) {
         final double c0 = n0;
         final double c1 = n1;
         final double e1 = d1;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high);
+            dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high) * factor;
         }
     }
 
     private void inverseQuadraticBlock(double[] from, double[] dst, int start, int end,
-            double low, double high) {
+            double low, double high, double factor) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
@@ -990,7 +1022,42 @@ public final class Bridge {
         final double e2 = d2;
         final double sign = rootSign;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
+            dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high) * factor;
+        }
+    }
+
+    private void codesLinearBlock(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double low, double high, double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        for (int i = start; i < end; i++) {
+            dst[i] = inverseLinear(codes[i + shift] * scale + offset, c0, c1, low, high)
+                    * factor;
+        }
+    }
+
+    private void codesFirstDegreeBlock(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double low, double high, double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        for (int i = start; i < end; i++) {
+            dst[i] = inverseFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1, low,
+                    high) * factor;
+        }
+    }
+
+    private void codesQuadraticBlock(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double low, double high, double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        for (int i = start; i < end; i++) {
+            dst[i] = inverseQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2,
+                    sign, low, high) * factor;
         }
     }
 
@@ -1091,6 +1158,37 @@ public final class Bridge {
         return text.toString();
     }
 
+    /** The leads as the sheets list them, e.g. {@code arm 1 1.5 Ω, excitation 1.0 Ω}; "" if none. */
+    String leadsText() {
+        StringBuilder leads = new StringBuilder();
+        for (int i = 0; i < 4; i++) {
+            if (armLeads[i] != 0) {
+                leads.append(leads.length() == 0 ? "" : ", ").append("arm ").append(i + 1)
+                        .append(' ').append(Resistance.ofOhms(armLeads[i]));
+            }
+        }
+        if (excitationLeads != 0) {
+            leads.append(leads.length() == 0 ? "" : ", ").append("excitation ")
+                    .append(Resistance.ofOhms(excitationLeads));
+        }
+        return leads.toString();
+    }
+
+    /** The arrangement and its sensitivity, e.g. {@code quarter bridge, 0.5 mV/V per 1000 µε}. */
+    String arrangementText() {
+        return arrangement + ", " + sensitivity() + " per 1000 µε";
+    }
+
+    /** The arms, e.g. {@code arm 1: active gauge ×1.0 (120.0 Ω, K=2.0); arm 2: ...}. */
+    String armsText() {
+        return armList(arms);
+    }
+
+    /** The offset subtracted by {@link #zeroedByOffset} (V/V); 0 if none. */
+    double zeroingOffset() {
+        return offset;
+    }
+
     /**
      * The arrangement, its sensitivity and its arms, e.g.
      * {@code quarter bridge, 0.5 mV/V per 1000 µε [arm 1: active gauge ×1.0 (120.0 Ω, K=2.0);
@@ -1099,18 +1197,8 @@ public final class Bridge {
     @Override
     public String toString() {
         String zero = offset == 0 ? "" : ", zero offset " + VoltageRatio.ofVoltsPerVolt(offset);
-        StringBuilder leads = new StringBuilder();
-        for (int i = 0; i < 4; i++) {
-            if (armLeads[i] != 0) {
-                leads.append(leads.length() == 0 ? "; leads: " : ", ").append("arm ").append(i + 1)
-                        .append(' ').append(Resistance.ofOhms(armLeads[i]));
-            }
-        }
-        if (excitationLeads != 0) {
-            leads.append(leads.length() == 0 ? "; leads: " : ", ").append("excitation ")
-                    .append(Resistance.ofOhms(excitationLeads));
-        }
-        return arrangement + ", " + sensitivity() + " per 1000 µε" + zero + " [" + armList(arms)
-                + leads + "]";
+        String leads = leadsText();
+        return arrangementText() + zero + " [" + armList(arms)
+                + (leads.isEmpty() ? "" : "; leads: " + leads) + "]";
     }
 }

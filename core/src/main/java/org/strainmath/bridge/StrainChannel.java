@@ -37,6 +37,16 @@ import org.strainmath.quantity.VoltageRatio;
  */
 public final class StrainChannel {
 
+    /**
+     * Whether the {@code int[]} kernels convert codes and invert the bridge in one loop. The C2
+     * compiler of JDK 25 vectorises that loop; the one of JDK 17 vectorises no loop that
+     * converts {@code int} to {@code double} beside a division, so there the codes are
+     * converted in a loop of their own first, which makes the channel several times faster
+     * (measured with {@code ChannelBenchmark}; the JDKs in between are not measured and take
+     * the JDK 17 path). Both paths compute the same bits.
+     */
+    static final boolean ONE_LOOP = Runtime.version().feature() >= 25;
+
     private final Bridge bridge;
     private final AdcInput input;
     private final double transverseRatio;        // NaN unless set
@@ -325,13 +335,38 @@ public final class StrainChannel {
 
     private int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff,
             double[] dst, int dstOff, int len) {
+        return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len, ONE_LOOP);
+    }
+
+    /**
+     * The int[] kernel with the loop structure chosen by {@code oneLoop} (see
+     * {@link #ONE_LOOP}); both give the same bits. Package-private so that tests run both.
+     */
+    int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff, double[] dst,
+            int dstOff, int len, boolean oneLoop) {
         Checks.block(Objects.requireNonNull(codes, "codes").length, codesOff, dst, dstOff, len);
+        if (!oneLoop) {
+            codesToRatio(codes, codesOff, dst, dstOff, len);
+            return finish(dst, dstOff, len, celsius, celsiusOff);
+        }
+        final int shift = codesOff - dstOff;
+        int nan = 0;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int stop = start + Math.min(Kernels.CHUNK, len - done);
+            bridge.codesToStrainWithin(codes, shift, scale, offset, dst, start, stop, low, high,
+                    transverseFactor);
+            nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff);
+        }
+        return nan;
+    }
+
+    private void codesToRatio(int[] codes, int codesOff, double[] dst, int dstOff, int len) {
         final double s = scale;
         final double o = offset;
         for (int i = 0; i < len; i++) {
             dst[dstOff + i] = codes[codesOff + i] * s + o;
         }
-        return finish(dst, dstOff, len, celsius, celsiusOff);
     }
 
     /**
@@ -355,19 +390,24 @@ public final class StrainChannel {
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            bridge.toStrainWithin(dst, dst, start, stop, low, high);
-            if (transverseFactor != 1.0) {
-                scaleInPlace(dst, start, stop, transverseFactor);
-            }
-            if (thermal != null && celsius != null) {
-                thermal.correctInPlace(dst, celsius, celsiusOff - dstOff, start, stop);
-                if (drift != 0.0) {
-                    gaugeFactorInPlace(dst, celsius, celsiusOff - dstOff, start, stop);
-                }
-            }
-            nan += Kernels.countNaN(dst, start, stop - start);
+            bridge.toStrainWithin(dst, dst, start, stop, low, high, transverseFactor);
+            nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff);
         }
         return nan;
+    }
+
+    /**
+     * The thermal correction of dst[start, end) in place, when the channel has one and
+     * temperatures are given (celsius[i + shift] for dst[i]); returns the count of NaN there.
+     */
+    private int corrected(double[] dst, int start, int stop, double[] celsius, int shift) {
+        if (thermal != null && celsius != null) {
+            thermal.correctInPlace(dst, celsius, shift, start, stop);
+            if (drift != 0.0) {
+                gaugeFactorInPlace(dst, celsius, shift, start, stop);
+            }
+        }
+        return Kernels.countNaN(dst, start, stop - start);
     }
 
     private void gaugeFactorInPlace(double[] dst, double[] celsius, int shift, int start,
@@ -385,25 +425,50 @@ public final class StrainChannel {
         }
     }
 
-    private static void scaleInPlace(double[] a, int start, int end, double factor) {
-        for (int i = start; i < end; i++) {
-            a[i] = a[i] * factor;
-        }
-    }
-
-    /** The channel sheet: bridge, converter, corrections, resolution. */
+    /**
+     * The channel sheet: one line per piece in the order a technician wires them, e.g.
+     * <pre>
+     * StrainChannel
+     *   gauge       350.0 Ω, K=2.08, Kt=0.6 %
+     *   bridge      quarter bridge, 0.517451 mV/V per 1000 µε
+     *   arms        arm 1: active gauge ×1.0 (350.0 Ω, K=2.08); arm 2: completion resistor ...
+     *   leads       arm 1 1.72414 Ω, arm 2 1.72414 Ω; desensitisation 0.995098
+     *   converter   24 bits, two's complement, gain 128.0, ratiometric, 9.31323e-7 mV/V per code
+     *   transverse  εt/εa = -0.29, factor 1.00003
+     *   thermal     -28.4 + 2.05·T - 0.047·T² µε, T in °C, at K=2.0; zeroed at 22.0 °C
+     *   zero        offset -0.00199303 mV/V subtracted
+     *   resolution  0.00179983 µε per code
+     * </pre>
+     */
     @Override
     public String toString() {
-        StringBuilder text = new StringBuilder("StrainChannel[").append(bridge).append("; ")
-                .append(input);
-        if (!Double.isNaN(transverseRatio)) {
-            text.append("; transverse correction at εt/εa = ").append(Format.number(transverseRatio))
-                    .append(" (×").append(Format.number(transverseFactor)).append(')');
-        }
-        if (thermal != null) {
-            text.append("; ").append(thermalOutput).append(" zeroed at ").append(zeroTemperature);
-        }
-        return text.append("; ").append(input.strainPerCode(bridge)).append(" per code]")
-                .toString();
+        StringBuilder text = new StringBuilder("StrainChannel");
+        line(text, "gauge", inside(firstActiveGauge(bridge).toString()));
+        line(text, "bridge", bridge.arrangementText());
+        line(text, "arms", bridge.armsText());
+        String leads = bridge.leadsText();
+        line(text, "leads", leads.isEmpty() ? "none"
+                : leads + "; desensitisation " + Format.number(bridge.leadDesensitisation()));
+        line(text, "converter", inside(input.toString()));
+        line(text, "transverse", Double.isNaN(transverseRatio) ? "not corrected"
+                : "εt/εa = " + Format.number(transverseRatio) + ", factor "
+                        + Format.number(transverseFactor));
+        line(text, "thermal", thermal == null ? "not corrected"
+                : inside(thermalOutput.toString()) + "; zeroed at " + zeroTemperature);
+        double zero = bridge.zeroingOffset();
+        line(text, "zero", zero == 0
+                ? "output at zero strain " + bridge.zeroOutput()
+                : "offset " + VoltageRatio.ofVoltsPerVolt(zero) + " subtracted");
+        line(text, "resolution", input.strainPerCode(bridge) + " per code");
+        return text.toString();
+    }
+
+    private static void line(StringBuilder text, String label, String value) {
+        text.append("\n  ").append(label).append(" ".repeat(12 - label.length())).append(value);
+    }
+
+    /** The contents of a {@code Name[...]} text. */
+    private static String inside(String text) {
+        return text.substring(text.indexOf('[') + 1, text.length() - 1);
     }
 }

@@ -10,6 +10,7 @@ import org.junit.jupiter.api.Test;
 import org.strainmath.quantity.Resistance;
 import org.strainmath.quantity.Strain;
 import org.strainmath.quantity.Temperature;
+import org.strainmath.quantity.VoltageRatio;
 
 /** Whole channels: codes to corrected strain, on an invented channel of our own. */
 class StrainChannelTest {
@@ -93,6 +94,44 @@ class StrainChannelTest {
                 .isEqualTo(channel.toStrain(900_000, 60.0));
     }
 
+    static java.util.stream.Stream<Bridge> everyInverseForm() {
+        // One bridge of each form of the inverse: linear, first degree, quadratic.
+        return java.util.stream.Stream.of(Bridge.halfBending(GAUGE), WIRED,
+                Bridge.halfOppositeArms(GAUGE).withExcitationLeads(Resistance.ofOhms(0.5)));
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.MethodSource("everyInverseForm")
+    void bothLoopStructuresGiveTheScalarBitForBit(Bridge bridge) {
+        // Oracle: the scalar toStrain(long) of the same channel. The int[] kernel either
+        // converts and inverts in one loop (JDK 25) or in two (JDK 17); both must match it.
+        StrainChannel channel = StrainChannel.of(bridge, ADC).withTransverseCorrection(-0.25);
+        if (bridge == WIRED) {
+            channel = channel.zeroedByOffsetAt(ZERO_CODE);
+        }
+        SplittableRandom random = new SplittableRandom(41);
+        int n = 2 * org.strainmath.internal.Kernels.CHUNK + 77;
+        int[] codes = new int[n + 5];
+        for (int i = 0; i < codes.length; i++) {
+            codes[i] = random.nextInt(-(1 << 23), 1 << 23);
+        }
+        codes[100] = (1 << 23) - 1;
+        double[] expected = new double[n];
+        int expectedNaN = 0;
+        for (int i = 0; i < n; i++) {
+            expected[i] = channel.toStrain(codes[i + 5]);
+            expectedNaN += Double.isNaN(expected[i]) ? 1 : 0;
+        }
+        assertThat(expectedNaN).isPositive();
+        for (boolean oneLoop : new boolean[] {true, false}) {
+            double[] out = new double[n + 2];
+            int nan = channel.convert(codes, 5, null, 0, out, 2, n, oneLoop);
+            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("one loop: %s", oneLoop)
+                    .isEqualTo(expected);
+            assertThat(nan).isEqualTo(expectedNaN);
+        }
+    }
+
     @Test
     void aChannelWithoutCorrectionsIsTheConverterThenTheBridge() {
         StrainChannel channel = StrainChannel.of(WIRED, ADC);
@@ -148,13 +187,28 @@ class StrainChannelTest {
     void theChannelSheetNamesEveryPiece() {
         StrainChannel channel = StrainChannel.of(WIRED, ADC).withTransverseCorrection(-0.3)
                 .withThermalOutput(ThermalOutput.ofCelsius(-30, 2.1), Temperature.ofCelsius(21));
-        assertThat(channel.toString())
-                .startsWith("StrainChannel[quarter bridge")
-                .contains("leads: arm 1 1.5 Ω, arm 2 1.5 Ω, excitation 1.0 Ω")
-                .contains("AdcInput[24 bits")
-                .contains("transverse correction at εt/εa = -0.3")
-                .contains("ThermalOutput[-30.0 + 2.1·T µε, T in °C, at K=2.0] zeroed at 21.0 °C")
-                .endsWith("µε per code]");
+        // Expected sheet written out by hand from the parts (common practice, no source):
+        // 24-bit ratiometric at gain 128 is 2^-23/128 V/V per code; leads 1.5 Ω in arms 1 and
+        // 2 and 0.5 Ω per excitation lead.
+        assertThat(channel.toString()).isEqualTo(String.join("\n",
+                "StrainChannel",
+                "  gauge       350.0 Ω, K=2.1, Kt=1.5 %",
+                "  bridge      quarter bridge, " + WIRED.sensitivity() + " per 1000 µε",
+                "  arms        arm 1: active gauge ×1.0 (350.0 Ω, K=2.1); arm 2: completion"
+                        + " resistor 350.0 Ω; arm 3: completion resistor 350.0 Ω; arm 4:"
+                        + " completion resistor 350.0 Ω",
+                "  leads       arm 1 1.5 Ω, arm 2 1.5 Ω, excitation 1.0 Ω; desensitisation "
+                        + org.strainmath.internal.Format.number(WIRED.leadDesensitisation()),
+                "  converter   24 bits, two's complement, gain 128.0, ratiometric,"
+                        + " 9.31323e-7 mV/V per code",
+                "  transverse  εt/εa = -0.3, factor "
+                        + org.strainmath.internal.Format.number((1 - 0.285 * 0.015) / (1 - 0.015 * 0.3)),
+                "  thermal     -30.0 + 2.1·T µε, T in °C, at K=2.0; zeroed at 21.0 °C",
+                "  zero        output at zero strain 0.0 mV/V",
+                "  resolution  " + ADC.strainPerCode(WIRED) + " per code"));
+        assertThat(channel.zeroedByOffsetAt(ZERO_CODE).toString())
+                .contains("  zero        offset " + VoltageRatio.ofVoltsPerVolt(ADC.toRatio(ZERO_CODE))
+                        + " subtracted");
     }
 
     @Test
@@ -219,5 +273,32 @@ class StrainChannelTest {
         for (int i = 0; i < 3; i++) {
             assertThat(out[i]).isEqualTo(channel.toStrain(codes[i], celsius[i]));
         }
+    }
+
+    static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> driftCases() {
+        SplittableRandom random = new SplittableRandom(0xD21F7);
+        return java.util.stream.Stream.generate(() -> org.junit.jupiter.params.provider.Arguments.of(
+                random.nextDouble(1.8, 4.5), random.nextDouble(-2, 2), random.nextDouble(-50, 200),
+                random.nextDouble(-50, 200), random.nextDouble(0, 10),
+                random.nextInt(-3_000_000, 3_000_000))).limit(100);
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest(name = "K={0} c={1} %/100K Tref={2} T={3} RL={4} code={5}")
+    @org.junit.jupiter.params.provider.MethodSource("driftCases")
+    void aDriftingGaugeFactorIsUndoneOverRealisticRanges(double k, double percentPer100K,
+            double referenceCelsius, double celsius, double leadOhms, int code) {
+        // Oracle as above: the bridge built with K(T) = K·(1 + c·(T − Tref)) (the data sheet's
+        // definition of the coefficient, common practice, no source) reads the code as the
+        // channel must; the channel rescales its strain to match it to 1e-12 relative.
+        StrainGauge drifting = StrainGauge.ofOhms(350, k).withGaugeFactorTemperatureCoefficient(
+                percentPer100K, Temperature.ofCelsius(referenceCelsius));
+        Resistance lead = Resistance.ofOhms(leadOhms);
+        StrainChannel channel = StrainChannel.of(Bridge.quarter(drifting).withThreeWireLeads(lead),
+                ADC).withThermalOutput(ThermalOutput.ofCelsius(0.0), Temperature.ofCelsius(20));
+        double kAtT = k * (1 + percentPer100K / 100 / 100 * (celsius - referenceCelsius));
+        double expected = Bridge.quarter(StrainGauge.ofOhms(350, kAtT)).withThreeWireLeads(lead)
+                .toStrain(ADC.toRatio(code));
+        assertThat(channel.toStrain(code, celsius))
+                .isCloseTo(expected, within(Math.abs(expected) * 1e-12 + 1e-18));
     }
 }
