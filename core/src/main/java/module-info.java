@@ -1,13 +1,17 @@
 /**
- * strainmath core: quantities with units, strain gauges, exact Wheatstone-bridge equations and
- * the per-sample kernels that convert blocks of bridge readings to strain.
+ * strainmath core: quantities with units, strain gauges, exact Wheatstone-bridge equations, the
+ * per-sample kernels that convert blocks of bridge readings to strain, and material
+ * constitutive conversion.
  *
- * <p>Exported: {@link org.strainmath.quantity} (immutable quantities with units) and
- * {@link org.strainmath.bridge} (gauges, bridge arms, bridges and their block kernels). The
+ * <p>Exported: {@link org.strainmath.quantity} (immutable quantities with units),
+ * {@link org.strainmath.bridge} (gauges, bridge arms, bridges, channels and their block
+ * kernels) and {@link org.strainmath.material} (elastic constants, plane strain and stress
+ * states, Hooke's law, the orthotropic lamina). The
  * package {@code org.strainmath.internal} holds argument checks and formatting shared by the
  * exported packages and is not exported.
  */
 module org.strainmath.core {
     exports org.strainmath.quantity;
     exports org.strainmath.bridge;
+    exports org.strainmath.material;
 }

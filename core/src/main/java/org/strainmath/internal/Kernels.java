@@ -26,6 +26,45 @@ public final class Kernels {
      * sum, leads to the exact count.
      */
     public static int countNaN(double[] a, int off, int len) {
+        if (sumIsFinite(a, off, len)) {
+            return 0;
+        }
+        int count = 0;
+        for (int j = off; j < off + len; j++) {
+            double x = a[j];
+            if (x != x) {
+                count++;
+            }
+        }
+        return count;
+    }
+
+    /**
+     * The count of rows {@code i} in [off, off + len) where {@code a[i]}, {@code b[i]} or
+     * {@code c[i]} is NaN: the samples of a three-output kernel that have no result. Probes each
+     * array as {@link #countNaN} does and counts only if a probe fails.
+     */
+    public static int countNaNRows(double[] a, double[] b, double[] c, int off, int len) {
+        if (sumIsFinite(a, off, len) && sumIsFinite(b, off, len) && sumIsFinite(c, off, len)) {
+            return 0;
+        }
+        int count = 0;
+        for (int j = off; j < off + len; j++) {
+            double x = a[j];
+            double y = b[j];
+            double z = c[j];
+            if (x != x || y != y || z != z) {
+                count++;
+            }
+        }
+        return count;
+    }
+
+    /**
+     * Whether the sum of {@code a[off, off + len)}, in eight independent accumulators, is
+     * finite, which proves the range free of NaN (an infinity or an overflow also fails it).
+     */
+    private static boolean sumIsFinite(double[] a, int off, int len) {
         double s0 = 0;
         double s1 = 0;
         double s2 = 0;
@@ -50,17 +89,7 @@ public final class Kernels {
             s0 += a[i];
         }
         double sum = ((s0 + s1) + (s2 + s3)) + ((s4 + s5) + (s6 + s7));
-        if (sum - sum == 0) {
-            return 0;
-        }
-        int count = 0;
-        for (int j = off; j < end; j++) {
-            double x = a[j];
-            if (x != x) {
-                count++;
-            }
-        }
-        return count;
+        return sum - sum == 0;
     }
 
     /**

@@ -50,6 +50,23 @@ class KernelsTest {
     }
 
     @Test
+    void rowsAreCountedOnceWhateverColumnHoldsTheNaN() {
+        // Oracle: a plain loop over the rows (common practice, no source).
+        double[] a = new double[40];
+        double[] b = new double[40];
+        double[] c = new double[40];
+        assertThat(Kernels.countNaNRows(a, b, c, 0, 40)).isZero();
+        a[3] = Double.NaN;
+        b[3] = Double.NaN;
+        b[17] = Double.NaN;
+        c[39] = Double.NaN;
+        c[20] = Double.POSITIVE_INFINITY;
+        assertThat(Kernels.countNaNRows(a, b, c, 0, 40)).isEqualTo(3);
+        assertThat(Kernels.countNaNRows(a, b, c, 4, 36)).isEqualTo(2);
+        assertThat(Kernels.countNaNRows(a, b, c, 18, 21)).isZero();
+    }
+
+    @Test
     void sameIndexSourceCopiesOnlyWhenTheOffsetsDiffer() {
         double[] src = {1, 2, 3, 4};
         double[] dst = new double[6];

@@ -15,7 +15,8 @@ class ModuleLayoutTest {
         assertThat(descriptor).as("tests run on the module path").isNotNull();
         assertThat(descriptor.name()).isEqualTo("org.strainmath.core");
         assertThat(descriptor.exports()).extracting(ModuleDescriptor.Exports::source)
-                .containsExactlyInAnyOrder("org.strainmath.quantity", "org.strainmath.bridge");
+                .containsExactlyInAnyOrder("org.strainmath.quantity", "org.strainmath.bridge",
+                        "org.strainmath.material");
         assertThat(descriptor.packages()).contains("org.strainmath.internal");
         assertThat(descriptor.requires()).extracting(ModuleDescriptor.Requires::name)
                 .containsExactly("java.base");
