@@ -5,7 +5,10 @@ import java.util.Locale;
 
 import org.strainmath.bridge.Bridge;
 import org.strainmath.bridge.StrainGauge;
+import org.strainmath.material.IsotropicMaterial;
+import org.strainmath.material.PlaneStrain;
 import org.strainmath.quantity.Strain;
+import org.strainmath.quantity.Stress;
 import org.strainmath.quantity.Voltage;
 import org.strainmath.quantity.VoltageRatio;
 
@@ -70,6 +73,17 @@ public final class Demo {
                     micro(gussetStrain[i]), micro(linear / 1e6)));
         }
         out.println("samples with no physical strain: rod " + rodBad + ", gusset " + gussetBad);
+        out.println();
+
+        // The rods are in uniaxial stress: the axial strain with its Poisson contraction gives
+        // the rod stress through Hooke's law. Steel constants of the demo, invented.
+        IsotropicMaterial steel = IsotropicMaterial.of(Stress.ofGigapascals(200), 0.30);
+        int last = rodStrain.length - 1;
+        PlaneStrain rodState = new PlaneStrain(rodStrain[last], -0.30 * rodStrain[last], 0);
+        out.println("rod stress at step " + last + ": "
+                + steel.stressInPlaneStress(rodState).normalX() + " (demo steel, invented: E = "
+                + String.format(Locale.ROOT, "%.0f GPa", steel.youngsModulus().toGigapascals())
+                + ", ν = " + steel.poissonsRatio() + ")");
         out.println();
 
         Strain peak = Strain.ofMicrostrain(2000);
