@@ -7,11 +7,14 @@
  * {@link org.strainmath.bridge} (gauges, bridge arms, bridges, channels and their block
  * kernels) and {@link org.strainmath.material} (elastic constants, plane strain and stress
  * states, Hooke's law, the orthotropic lamina). The
- * package {@code org.strainmath.internal} holds argument checks and formatting shared by the
- * exported packages and is not exported.
+ * package {@code org.strainmath.internal} holds argument checks, formatting and kernel helpers;
+ * it is exported only to the rosette and calibration modules of this library.
  */
 module org.strainmath.core {
     exports org.strainmath.quantity;
     exports org.strainmath.bridge;
     exports org.strainmath.material;
+    // Argument checks, formatting and kernel helpers, shared with the other library modules
+    // only.
+    exports org.strainmath.internal to org.strainmath.rosette, org.strainmath.calibration;
 }

@@ -1,10 +1,11 @@
 /**
  * strainmath rosette: rosette geometry and reduction, principal strains and stresses, and
- * equivalent stress, on the quantities of {@code org.strainmath.core}.
+ * equivalent stress, on the quantities and materials of {@code org.strainmath.core}.
  *
- * <p>The reduction itself arrives with its own work item; until then the module declares its
- * place in the layering (it reads core, and whoever reads it reads core) and exports nothing.
+ * <p>Exported: {@link org.strainmath.rosette}.
  */
 module org.strainmath.rosette {
     requires transitive org.strainmath.core;
+
+    exports org.strainmath.rosette;
 }

@@ -6,7 +6,7 @@ import java.lang.module.ModuleDescriptor;
 
 import org.junit.jupiter.api.Test;
 
-/** Core exports its API packages and nothing else (DESIGN.md, layout). */
+/** Core exports its API packages, and its internals only to the library's modules (DESIGN.md, layout). */
 class ModuleLayoutTest {
 
     @Test
@@ -14,9 +14,17 @@ class ModuleLayoutTest {
         ModuleDescriptor descriptor = Checks.class.getModule().getDescriptor();
         assertThat(descriptor).as("tests run on the module path").isNotNull();
         assertThat(descriptor.name()).isEqualTo("org.strainmath.core");
-        assertThat(descriptor.exports()).extracting(ModuleDescriptor.Exports::source)
+        assertThat(descriptor.exports()).filteredOn(e -> !e.isQualified())
+                .extracting(ModuleDescriptor.Exports::source)
                 .containsExactlyInAnyOrder("org.strainmath.quantity", "org.strainmath.bridge",
                         "org.strainmath.material");
+        // The internals go to the library's own modules only.
+        assertThat(descriptor.exports()).filteredOn(ModuleDescriptor.Exports::isQualified)
+                .singleElement().satisfies(e -> {
+                    assertThat(e.source()).isEqualTo("org.strainmath.internal");
+                    assertThat(e.targets()).containsExactlyInAnyOrder("org.strainmath.rosette",
+                            "org.strainmath.calibration");
+                });
         assertThat(descriptor.packages()).contains("org.strainmath.internal");
         assertThat(descriptor.requires()).extracting(ModuleDescriptor.Requires::name)
                 .containsExactly("java.base");
