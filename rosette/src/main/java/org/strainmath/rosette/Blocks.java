@@ -15,33 +15,46 @@ final class Blocks {
 
     /**
      * Checks {@code readings} (one array per gauge, {@code gauges} of them) from {@code srcOff}
-     * and the outputs from {@code dstOff}, {@code len} samples each; every output must be a
-     * different array, and may be an input array only at the same offset.
+     * and the outputs from {@code dstOff}, {@code len} samples each (null for a missing second
+     * or third output): every output a different array, and an input array only at the same
+     * offset. No allocation.
      */
     static void block(double[][] readings, int gauges, int srcOff, int dstOff, int len,
-            double[]... outputs) {
+            double[] o1, double[] o2, double[] o3) {
         Objects.requireNonNull(readings, "readings");
         if (readings.length != gauges) {
             throw new IllegalArgumentException("readings must hold one array per gauge, "
                     + gauges + ": " + readings.length);
         }
         for (int j = 0; j < gauges; j++) {
-            Objects.requireNonNull(readings[j], "readings[" + j + "]");
+            if (readings[j] == null) {
+                throw new NullPointerException("readings[" + j + "]");   // message built only here
+            }
             Objects.checkFromIndexSize(srcOff, len, readings[j].length);
         }
-        for (double[] out : outputs) {
-            Objects.checkFromIndexSize(dstOff, len, Objects.requireNonNull(out, "output").length);
-            for (double[] in : readings) {
-                if (out == in && srcOff != dstOff) {
-                    throw new IllegalArgumentException("an output that is also an input array "
-                            + "needs dstOff == srcOff: " + dstOff + " != " + srcOff);
-                }
+        output(readings, srcOff, dstOff, len, o1);
+        if (o2 != null) {
+            output(readings, srcOff, dstOff, len, o2);
+            if (o2 == o1) {
+                throw new IllegalArgumentException("the outputs must be different arrays");
             }
         }
-        for (int i = 0; i < outputs.length; i++) {
-            for (int k = i + 1; k < outputs.length; k++) {
-                if (outputs[i] == outputs[k]) {
-                    throw new IllegalArgumentException("the outputs must be different arrays");
+        if (o3 != null) {
+            output(readings, srcOff, dstOff, len, o3);
+            if (o3 == o1 || o3 == o2) {
+                throw new IllegalArgumentException("the outputs must be different arrays");
+            }
+        }
+    }
+
+    private static void output(double[][] readings, int srcOff, int dstOff, int len,
+            double[] out) {
+        Objects.checkFromIndexSize(dstOff, len, Objects.requireNonNull(out, "output").length);
+        if (srcOff != dstOff) {
+            for (double[] in : readings) {
+                if (out == in) {
+                    throw new IllegalArgumentException("an output that is also an input array "
+                            + "needs dstOff == srcOff: " + dstOff + " != " + srcOff);
                 }
             }
         }

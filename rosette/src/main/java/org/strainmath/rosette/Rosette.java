@@ -74,13 +74,12 @@ public final class Rosette {
     private final IsotropicMaterial material;  // or null
     private final boolean tee;
 
-    // Composed: (C, D, H) = rows · readings, and the stress rows when there is a material.
+    // Composed: (C, D, H) = rows · readings; E/(1 − ν²) and ν when there is a material.
     private final double[] rowC;
     private final double[] rowD;
     private final double[] rowH;
-    private final double[] rowP;
-    private final double[] rowQ;
-    private final double[] rowS;
+    private final double stiffness;
+    private final double poisson;
     private final double[][] model;        // n × 3: readings = model · (C, D, H)
 
     private Rosette(String kind, double[] nominal, double[] measured, boolean clockwise,
@@ -118,26 +117,12 @@ public final class Rosette {
         this.rowD = rows[1];
         this.rowH = rows[2];
         if (material == null) {
-            rowP = null;
-            rowQ = null;
-            rowS = null;
+            stiffness = Double.NaN;
+            poisson = Double.NaN;
         } else {
-            // Plane stress: σx + σy = 2E/(1 − ν)·C, (σx − σy)/2 = 2G·D, τxy = 2G·H.
-            double e = material.youngsModulus().toPascals();
-            double nu = material.poissonsRatio();
-            double g = material.shearModulus().toPascals();
-            rowP = scaled(rowC, e / (1 - nu));
-            rowQ = scaled(rowD, 2 * g);
-            rowS = scaled(rowH, 2 * g);
+            poisson = material.poissonsRatio();
+            stiffness = material.youngsModulus().toPascals() / ((1 - poisson) * (1 + poisson));
         }
-    }
-
-    private static double[] scaled(double[] row, double factor) {
-        double[] out = new double[row.length];
-        for (int j = 0; j < row.length; j++) {
-            out[j] = row[j] * factor;
-        }
-        return out;
     }
 
     // ---------------------------------------------------------------- factories
@@ -518,7 +503,7 @@ public final class Rosette {
         for (int j = 0; j < r.length; j++) {
             residuals[j] = fitted ? r[j] - (model[j][0] * c + model[j][1] * d + model[j][2] * h) : 0;
         }
-        return new RosetteStrains(this, r.clone(), state, principal, residuals);
+        return new RosetteStrains(this, new double[] {c, d, h}, state, principal, residuals);
     }
 
     /** Σ row[j]·r[j] in index order, starting from the first product (as the kernels do). */
@@ -541,12 +526,19 @@ public final class Rosette {
         return (theta * gate) / gate;
     }
 
-    /** The stress rows, or an exception when the rosette has no material. */
-    double[][] stressRows() {
+    /** Fails when the rosette has no material. */
+    private void requireMaterial() {
         if (material == null) {
             throw new IllegalStateException("the rosette has no material: use withMaterial first");
         }
-        return new double[][] {rowP, rowQ, rowS};
+    }
+
+    /** The stresses of readings r, whose principal strains are e1, e2, state c, d, h. */
+    RosetteStresses stresses(double c, double d, double h, double e1, double e2,
+            Optional<Angle> angle) {
+        requireMaterial();
+        return new RosetteStresses(material, stiffness, poisson,
+                material.stressInPlaneStress(new PlaneStrain(c + d, c - d, 2 * h)), e1, e2, angle);
     }
 
     double[] rowC() {
@@ -581,8 +573,27 @@ public final class Rosette {
      */
     public int toPrincipalStrains(double[][] readings, int srcOff, double[] e1, double[] e2,
             int dstOff, int len) {
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, e2);
-        return RosetteKernels.centreAndRadius(readings, srcOff, rowC, rowD, rowH, e1, e2, dstOff, len);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, e2, null);
+        return RosetteKernels.strains(readings, srcOff, rowC, rowD, rowH, e1, e2, dstOff, len);
+    }
+
+    /**
+     * The principal strains and the von Mises stress together, in two short loops per chunk
+     * (the strains, then von Mises from them), the fastest way to both. Bit for bit
+     * {@link #toPrincipalStrains} and {@link #toVonMises}.
+     *
+     * @return the number of samples with a NaN output
+     * @throws IllegalStateException     if the rosette has no material
+     * @throws NullPointerException      if an array is null
+     * @throws IndexOutOfBoundsException if a range is outside its array
+     * @throws IllegalArgumentException  as {@link #toPrincipalStrains}
+     */
+    public int toPrincipalStrainsAndVonMises(double[][] readings, int srcOff, double[] e1,
+            double[] e2, double[] vonMises, int dstOff, int len) {
+        requireMaterial();
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, e2, vonMises);
+        return RosetteKernels.strainsAndVonMises(readings, srcOff, rowC, rowD, rowH, stiffness,
+                poisson, e1, e2, vonMises, dstOff, len);
     }
 
     /**
@@ -597,7 +608,7 @@ public final class Rosette {
      */
     public int toPrincipalAngles(double[][] readings, int srcOff, double[] radians, int dstOff,
             int len) {
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, radians);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, radians, null, null);
         return RosetteKernels.angle(readings, srcOff, rowC, rowD, rowH, radians, dstOff, len);
     }
 
@@ -613,13 +624,14 @@ public final class Rosette {
     public int toStrainState(double[][] readings, int srcOff, double[] exx, double[] eyy,
             double[] gxy, int dstOff, int len) {
         Blocks.block(readings, rowC.length, srcOff, dstOff, len, exx, eyy, gxy);
-        return RosetteKernels.state(readings, srcOff, rowC, rowD, rowH, exx, eyy, gxy, dstOff, len);
+        return RosetteKernels.state(readings, srcOff, rowC, rowD, rowH, exx, eyy, gxy, dstOff,
+                len);
     }
 
     /**
-     * Converts readings into the in-plane principal stresses σ1, σ2 (Pa) in plane stress:
-     * σ1,2 = P ± √(Q² + S²) with P = E/(1 − ν)·C, Q = 2G·D, S = 2G·H. Allocation-free; bit for
-     * bit {@link RosetteStresses#principal()}.
+     * Converts readings into the in-plane principal stresses σ1, σ2 (Pa), in plane stress from
+     * the principal strains: σ1 = E/(1 − ν²)·(ε1 + ν·ε2), σ2 = E/(1 − ν²)·(ε2 + ν·ε1).
+     * Allocation-free; bit for bit {@link RosetteStresses#principal()}.
      *
      * @return the number of samples with a NaN output
      * @throws IllegalStateException     if the rosette has no material
@@ -629,16 +641,17 @@ public final class Rosette {
      */
     public int toPrincipalStresses(double[][] readings, int srcOff, double[] s1, double[] s2,
             int dstOff, int len) {
-        double[][] rows = stressRows();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, s1, s2);
-        return RosetteKernels.centreAndRadius(readings, srcOff, rows[0], rows[1], rows[2], s1, s2,
-                dstOff, len);
+        requireMaterial();
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, s1, s2, null);
+        return RosetteKernels.stresses(RosetteKernels.Result.STRESSES, readings, srcOff, rowC,
+                rowD, rowH, stiffness, poisson, s1, s2, dstOff, len);
     }
 
     /**
      * Converts readings into the von Mises equivalent stress (Pa) in plane stress,
-     * σvm = √(σ1² − σ1σ2 + σ2²) = √(P² + 3(Q² + S²)), one square root per sample.
-     * Allocation-free; bit for bit {@link RosetteStresses#vonMises()}.
+     * σvm = √(σ1² − σ1σ2 + σ2²): two square roots per sample in one loop (use
+     * {@link #toPrincipalStrainsAndVonMises} when the strains are wanted too). Allocation-free;
+     * bit for bit {@link RosetteStresses#vonMises()}.
      *
      * @return the number of NaN outputs
      * @throws IllegalStateException     if the rosette has no material
@@ -648,16 +661,15 @@ public final class Rosette {
      */
     public int toVonMises(double[][] readings, int srcOff, double[] vonMises, int dstOff,
             int len) {
-        double[][] rows = stressRows();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, vonMises);
-        return RosetteKernels.vonMises(readings, srcOff, rows[0], rows[1], rows[2], vonMises, dstOff,
-                len);
+        requireMaterial();
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, vonMises, null, null);
+        return RosetteKernels.stresses(RosetteKernels.Result.VON_MISES, readings, srcOff, rowC,
+                rowD, rowH, stiffness, poisson, vonMises, null, dstOff, len);
     }
 
     /**
      * Converts readings into the Tresca equivalent stress (Pa) in plane stress, with σ3 = 0:
-     * max(|σ1 − σ2|, |σ1|, |σ2|) = R + max(R, |P|), R = √(Q² + S²). Allocation-free; bit for
-     * bit {@link RosetteStresses#tresca()}.
+     * max(σ1 − σ2, |σ1|, |σ2|). Allocation-free; bit for bit {@link RosetteStresses#tresca()}.
      *
      * @return the number of NaN outputs
      * @throws IllegalStateException     if the rosette has no material
@@ -666,9 +678,10 @@ public final class Rosette {
      * @throws IllegalArgumentException  as {@link #toPrincipalStrains}
      */
     public int toTresca(double[][] readings, int srcOff, double[] tresca, int dstOff, int len) {
-        double[][] rows = stressRows();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, tresca);
-        return RosetteKernels.tresca(readings, srcOff, rows[0], rows[1], rows[2], tresca, dstOff, len);
+        requireMaterial();
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, tresca, null, null);
+        return RosetteKernels.stresses(RosetteKernels.Result.TRESCA, readings, srcOff, rowC,
+                rowD, rowH, stiffness, poisson, tresca, null, dstOff, len);
     }
 
     // ---------------------------------------------------------------- object

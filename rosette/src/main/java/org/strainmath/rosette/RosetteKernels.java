@@ -3,15 +3,16 @@ package org.strainmath.rosette;
 import org.strainmath.internal.Kernels;
 
 /**
- * The block loops of {@link Rosette}. Each computes, per sample, three dot products of the
- * composed rows with the readings, X = Σ x_j·r_j, Y = Σ y_j·r_j, Z = Σ z_j·r_j (in index order,
- * from the first product, as {@code Rosette.dot} does), and one result from them. Three-gauge
- * rosettes run a loop that reads the three arrays directly; other counts loop over the gauges
- * per sample.
+ * The block loops of {@link Rosette}, and the per-sample functions they share with the value
+ * API. Each loop computes, per sample, three dot products of the composed rows with the
+ * readings, C = Σ c_j·r_j, D = Σ d_j·r_j, H = Σ h_j·r_j (in index order, from the first product,
+ * as {@code Rosette.dot} does), the principal strains ε1,2 = C ± √(D² + H²), and what is asked
+ * from them. Three-gauge rosettes run loops that read the three arrays at one index; other
+ * counts, or different offsets, loop over the gauges per sample.
  *
  * <p>The loops follow the findings of {@code DEVELOPERS.md}: one small loop per method, no
- * branch in a loop, the NaN count in a pass of its own, chunks of {@link Kernels#CHUNK}
- * samples, and one index for inputs and outputs where the offsets agree.
+ * branch in a loop, a second square root in a loop of its own (JDK 17 does not vectorise a
+ * long body with two), the NaN count in a pass of its own, chunks of {@link Kernels#CHUNK}.
  *
  * <p>Stateless; thread-safe.
  */
@@ -20,235 +21,332 @@ final class RosetteKernels {
     private RosetteKernels() {
     }
 
-    /** The kinds of result: X ± √(Y² + Z²), the angle, the state, von Mises, Tresca. */
-    private enum Result { CENTRE_AND_RADIUS, ANGLE, STATE, VON_MISES, TRESCA }
+    /** What the general loop writes. */
+    enum Result { STRAINS, ANGLE, STATE, STRESSES, VON_MISES, TRESCA }
 
-    static int centreAndRadius(double[][] r, int srcOff, double[] x, double[] y, double[] z,
-            double[] plus, double[] minus, int dstOff, int len) {
-        return run(Result.CENTRE_AND_RADIUS, r, srcOff, x, y, z, plus, minus, null, dstOff, len);
+    // ---------------------------------------------------------------- per-sample functions
+
+    /** σ1 = E/(1 − ν²)·(ε1 + ν·ε2), plane stress (Hooke's law along the principal axes). */
+    static double s1Of(double e1, double e2, double k, double nu) {
+        return k * (e1 + nu * e2);
     }
 
-    static int angle(double[][] r, int srcOff, double[] x, double[] y, double[] z,
-            double[] out, int dstOff, int len) {
-        return run(Result.ANGLE, r, srcOff, x, y, z, out, null, null, dstOff, len);
+    /** σ2 = E/(1 − ν²)·(ε2 + ν·ε1). */
+    static double s2Of(double e1, double e2, double k, double nu) {
+        return k * (e2 + nu * e1);
     }
 
-    static int state(double[][] r, int srcOff, double[] x, double[] y, double[] z,
-            double[] exx, double[] eyy, double[] gxy, int dstOff, int len) {
-        return run(Result.STATE, r, srcOff, x, y, z, exx, eyy, gxy, dstOff, len);
+    /** von Mises in plane stress, √(σ1² − σ1·σ2 + σ2²). */
+    static double vonMisesOf(double e1, double e2, double k, double nu) {
+        double s1 = s1Of(e1, e2, k, nu);
+        double s2 = s2Of(e1, e2, k, nu);
+        return Math.sqrt(s1 * s1 - s1 * s2 + s2 * s2);
     }
 
-    static int vonMises(double[][] r, int srcOff, double[] x, double[] y, double[] z,
-            double[] out, int dstOff, int len) {
-        return run(Result.VON_MISES, r, srcOff, x, y, z, out, null, null, dstOff, len);
+    /**
+     * Tresca in plane stress, max(σ1 − σ2, |σ1|, |σ2|) with σ1 ≥ σ2, each maximum written as
+     * (u + v + |u − v|)/2 (no {@code Math.max}, which is slow in loops on JDK 25).
+     */
+    static double trescaOf(double e1, double e2, double k, double nu) {
+        double s1 = s1Of(e1, e2, k, nu);
+        double s2 = s2Of(e1, e2, k, nu);
+        double a = Math.abs(s1);
+        double b = Math.abs(s2);
+        double larger = 0.5 * (a + b + Math.abs(a - b));
+        double difference = s1 - s2;
+        return 0.5 * (difference + larger + Math.abs(difference - larger));
     }
 
-    static int tresca(double[][] r, int srcOff, double[] x, double[] y, double[] z,
-            double[] out, int dstOff, int len) {
-        return run(Result.TRESCA, r, srcOff, x, y, z, out, null, null, dstOff, len);
-    }
+    // ---------------------------------------------------------------- block entry points
 
-    private static int run(Result result, double[][] r, int srcOff, double[] x, double[] y,
-            double[] z, double[] o1, double[] o2, double[] o3, int dstOff, int len) {
+    static int strains(double[][] r, int srcOff, double[] c, double[] d, double[] h,
+            double[] e1, double[] e2, int dstOff, int len) {
         int nan = 0;
         int shift = srcOff - dstOff;
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int end = start + Math.min(Kernels.CHUNK, len - done);
             if (r.length == 3 && shift == 0) {
-                three(result, r[0], r[1], r[2], x, y, z, o1, o2, o3, start, end);
+                strainsThree(r[0], r[1], r[2], c, d, h, e1, e2, start, end);
             } else {
-                general(result, r, shift, x, y, z, o1, o2, o3, start, end);
+                general(Result.STRAINS, r, shift, c, d, h, 0, 0, e1, e2, null, start, end);
             }
-            nan += count(o1, o2, o3, start, end - start);
+            nan += Kernels.countNaNRows(e1, e2, e1, start, end - start);
         }
         return nan;
     }
 
-    private static int count(double[] o1, double[] o2, double[] o3, int off, int len) {
-        if (o2 == null) {
-            return Kernels.countNaN(o1, off, len);
+    static int strainsAndVonMises(double[][] r, int srcOff, double[] c, double[] d,
+            double[] h, double k, double nu, double[] e1, double[] e2, double[] vm, int dstOff,
+            int len) {
+        int nan = 0;
+        int shift = srcOff - dstOff;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int end = start + Math.min(Kernels.CHUNK, len - done);
+            if (r.length == 3 && shift == 0) {
+                strainsThree(r[0], r[1], r[2], c, d, h, e1, e2, start, end);
+            } else {
+                general(Result.STRAINS, r, shift, c, d, h, 0, 0, e1, e2, null, start, end);
+            }
+            vonMisesOfPrincipal(e1, e2, k, nu, vm, start, end);
+            // A NaN in ε1 or ε2 makes σvm NaN: counting σvm counts the rows.
+            nan += Kernels.countNaN(vm, start, end - start);
         }
-        return Kernels.countNaNRows(o1, o2, o3 == null ? o1 : o3, off, len);
+        return nan;
     }
 
-    private static void three(Result result, double[] a, double[] b, double[] c, double[] x,
-            double[] y, double[] z, double[] o1, double[] o2, double[] o3, int start, int end) {
-        switch (result) {
-            case CENTRE_AND_RADIUS:
-                centreAndRadiusThree(a, b, c, x, y, z, o1, o2, start, end);
-                break;
-            case ANGLE:
-                angleThree(a, b, c, x, y, z, o1, start, end);
-                break;
-            case STATE:
-                stateThree(a, b, c, x, y, z, o1, o2, o3, start, end);
-                break;
-            case VON_MISES:
-                vonMisesThree(a, b, c, x, y, z, o1, start, end);
-                break;
-            default:
-                trescaThree(a, b, c, x, y, z, o1, start, end);
-                break;
+    static int angle(double[][] r, int srcOff, double[] c, double[] d, double[] h,
+            double[] out, int dstOff, int len) {
+        int nan = 0;
+        int shift = srcOff - dstOff;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int end = start + Math.min(Kernels.CHUNK, len - done);
+            if (r.length == 3 && shift == 0) {
+                angleThree(r[0], r[1], r[2], c, d, h, out, start, end);
+            } else {
+                general(Result.ANGLE, r, shift, c, d, h, 0, 0, out, null, null, start, end);
+            }
+            nan += Kernels.countNaN(out, start, end - start);
         }
+        return nan;
     }
 
-    private static void centreAndRadiusThree(double[] a, double[] b, double[] c, double[] x,
-            double[] y, double[] z, double[] plus, double[] minus, int start, int end) {
-        final double x0 = x[0];
-        final double x1 = x[1];
-        final double x2 = x[2];
-        final double y0 = y[0];
-        final double y1 = y[1];
-        final double y2 = y[2];
-        final double z0 = z[0];
-        final double z1 = z[1];
-        final double z2 = z[2];
+    static int state(double[][] r, int srcOff, double[] c, double[] d, double[] h,
+            double[] exx, double[] eyy, double[] gxy, int dstOff, int len) {
+        int nan = 0;
+        int shift = srcOff - dstOff;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int end = start + Math.min(Kernels.CHUNK, len - done);
+            if (r.length == 3 && shift == 0) {
+                stateThree(r[0], r[1], r[2], c, d, h, exx, eyy, gxy, start, end);
+            } else {
+                general(Result.STATE, r, shift, c, d, h, 0, 0, exx, eyy, gxy, start, end);
+            }
+            nan += Kernels.countNaNRows(exx, eyy, gxy, start, end - start);
+        }
+        return nan;
+    }
+
+    /** σ1, σ2 (STRESSES), von Mises or Tresca: a result of the principal strains. */
+    static int stresses(Result result, double[][] r, int srcOff, double[] c, double[] d,
+            double[] h, double k, double nu, double[] o1, double[] o2, int dstOff, int len) {
+        int nan = 0;
+        int shift = srcOff - dstOff;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int end = start + Math.min(Kernels.CHUNK, len - done);
+            if (r.length == 3 && shift == 0 && result == Result.STRESSES) {
+                stressesThree(r[0], r[1], r[2], c, d, h, k, nu, o1, o2, start, end);
+            } else if (r.length == 3 && shift == 0 && result == Result.VON_MISES) {
+                vonMisesThree(r[0], r[1], r[2], c, d, h, k, nu, o1, start, end);
+            } else if (r.length == 3 && shift == 0) {
+                trescaThree(r[0], r[1], r[2], c, d, h, k, nu, o1, start, end);
+            } else {
+                general(result, r, shift, c, d, h, k, nu, o1, o2, null, start, end);
+            }
+            nan += o2 == null ? Kernels.countNaN(o1, start, end - start)
+                    : Kernels.countNaNRows(o1, o2, o1, start, end - start);
+        }
+        return nan;
+    }
+
+    // ---------------------------------------------------------------- three-gauge loops
+
+    private static void strainsThree(double[] a, double[] b, double[] cc, double[] c,
+            double[] d, double[] h, double[] e1, double[] e2, int start, int end) {
+        final double c0 = c[0];
+        final double c1 = c[1];
+        final double c2 = c[2];
+        final double d0 = d[0];
+        final double d1 = d[1];
+        final double d2 = d[2];
+        final double h0 = h[0];
+        final double h1 = h[1];
+        final double h2 = h[2];
         for (int i = start; i < end; i++) {
             double ra = a[i];
             double rb = b[i];
-            double rc = c[i];
-            double cx = x0 * ra + x1 * rb + x2 * rc;
-            double cy = y0 * ra + y1 * rb + y2 * rc;
-            double cz = z0 * ra + z1 * rb + z2 * rc;
-            double radius = Math.sqrt(cy * cy + cz * cz);
-            plus[i] = cx + radius;
-            minus[i] = cx - radius;
+            double rc = cc[i];
+            double centre = c0 * ra + c1 * rb + c2 * rc;
+            double dd = d0 * ra + d1 * rb + d2 * rc;
+            double hh = h0 * ra + h1 * rb + h2 * rc;
+            double radius = Math.sqrt(dd * dd + hh * hh);
+            e1[i] = centre + radius;
+            e2[i] = centre - radius;
         }
     }
 
-    private static void angleThree(double[] a, double[] b, double[] c, double[] x, double[] y,
-            double[] z, double[] out, int start, int end) {
-        final double x0 = x[0];
-        final double x1 = x[1];
-        final double x2 = x[2];
-        final double y0 = y[0];
-        final double y1 = y[1];
-        final double y2 = y[2];
-        final double z0 = z[0];
-        final double z1 = z[1];
-        final double z2 = z[2];
+    private static void vonMisesOfPrincipal(double[] e1, double[] e2, double k, double nu,
+            double[] vm, int start, int end) {
+        for (int i = start; i < end; i++) {
+            vm[i] = vonMisesOf(e1[i], e2[i], k, nu);
+        }
+    }
+
+    private static void angleThree(double[] a, double[] b, double[] cc, double[] c, double[] d,
+            double[] h, double[] out, int start, int end) {
+        final double c0 = c[0];
+        final double c1 = c[1];
+        final double c2 = c[2];
+        final double d0 = d[0];
+        final double d1 = d[1];
+        final double d2 = d[2];
+        final double h0 = h[0];
+        final double h1 = h[1];
+        final double h2 = h[2];
         for (int i = start; i < end; i++) {
             double ra = a[i];
             double rb = b[i];
-            double rc = c[i];
-            out[i] = Rosette.principalAngle(x0 * ra + x1 * rb + x2 * rc,
-                    y0 * ra + y1 * rb + y2 * rc, z0 * ra + z1 * rb + z2 * rc);
+            double rc = cc[i];
+            out[i] = Rosette.principalAngle(c0 * ra + c1 * rb + c2 * rc,
+                    d0 * ra + d1 * rb + d2 * rc, h0 * ra + h1 * rb + h2 * rc);
         }
     }
 
-    private static void stateThree(double[] a, double[] b, double[] c, double[] x, double[] y,
-            double[] z, double[] exx, double[] eyy, double[] gxy, int start, int end) {
-        final double x0 = x[0];
-        final double x1 = x[1];
-        final double x2 = x[2];
-        final double y0 = y[0];
-        final double y1 = y[1];
-        final double y2 = y[2];
-        final double z0 = z[0];
-        final double z1 = z[1];
-        final double z2 = z[2];
+    private static void stateThree(double[] a, double[] b, double[] cc, double[] c, double[] d,
+            double[] h, double[] exx, double[] eyy, double[] gxy, int start, int end) {
+        final double c0 = c[0];
+        final double c1 = c[1];
+        final double c2 = c[2];
+        final double d0 = d[0];
+        final double d1 = d[1];
+        final double d2 = d[2];
+        final double h0 = h[0];
+        final double h1 = h[1];
+        final double h2 = h[2];
         for (int i = start; i < end; i++) {
             double ra = a[i];
             double rb = b[i];
-            double rc = c[i];
-            double cx = x0 * ra + x1 * rb + x2 * rc;
-            double cy = y0 * ra + y1 * rb + y2 * rc;
-            double cz = z0 * ra + z1 * rb + z2 * rc;
-            exx[i] = cx + cy;
-            eyy[i] = cx - cy;
-            gxy[i] = 2 * cz;
+            double rc = cc[i];
+            double centre = c0 * ra + c1 * rb + c2 * rc;
+            double dd = d0 * ra + d1 * rb + d2 * rc;
+            double hh = h0 * ra + h1 * rb + h2 * rc;
+            exx[i] = centre + dd;
+            eyy[i] = centre - dd;
+            gxy[i] = 2 * hh;
         }
     }
 
-    private static void vonMisesThree(double[] a, double[] b, double[] c, double[] x,
-            double[] y, double[] z, double[] out, int start, int end) {
-        final double x0 = x[0];
-        final double x1 = x[1];
-        final double x2 = x[2];
-        final double y0 = y[0];
-        final double y1 = y[1];
-        final double y2 = y[2];
-        final double z0 = z[0];
-        final double z1 = z[1];
-        final double z2 = z[2];
+    private static void stressesThree(double[] a, double[] b, double[] cc, double[] c,
+            double[] d, double[] h, double k, double nu, double[] s1, double[] s2, int start,
+            int end) {
+        final double c0 = c[0];
+        final double c1 = c[1];
+        final double c2 = c[2];
+        final double d0 = d[0];
+        final double d1 = d[1];
+        final double d2 = d[2];
+        final double h0 = h[0];
+        final double h1 = h[1];
+        final double h2 = h[2];
         for (int i = start; i < end; i++) {
             double ra = a[i];
             double rb = b[i];
-            double rc = c[i];
-            double p = x0 * ra + x1 * rb + x2 * rc;
-            double q = y0 * ra + y1 * rb + y2 * rc;
-            double s = z0 * ra + z1 * rb + z2 * rc;
-            out[i] = Math.sqrt(p * p + 3 * (q * q + s * s));
+            double rc = cc[i];
+            double centre = c0 * ra + c1 * rb + c2 * rc;
+            double dd = d0 * ra + d1 * rb + d2 * rc;
+            double hh = h0 * ra + h1 * rb + h2 * rc;
+            double radius = Math.sqrt(dd * dd + hh * hh);
+            double p1 = centre + radius;
+            double p2 = centre - radius;
+            s1[i] = s1Of(p1, p2, k, nu);
+            s2[i] = s2Of(p1, p2, k, nu);
         }
     }
 
-    private static void trescaThree(double[] a, double[] b, double[] c, double[] x, double[] y,
-            double[] z, double[] out, int start, int end) {
-        final double x0 = x[0];
-        final double x1 = x[1];
-        final double x2 = x[2];
-        final double y0 = y[0];
-        final double y1 = y[1];
-        final double y2 = y[2];
-        final double z0 = z[0];
-        final double z1 = z[1];
-        final double z2 = z[2];
+    private static void vonMisesThree(double[] a, double[] b, double[] cc, double[] c,
+            double[] d, double[] h, double k, double nu, double[] out, int start, int end) {
+        final double c0 = c[0];
+        final double c1 = c[1];
+        final double c2 = c[2];
+        final double d0 = d[0];
+        final double d1 = d[1];
+        final double d2 = d[2];
+        final double h0 = h[0];
+        final double h1 = h[1];
+        final double h2 = h[2];
         for (int i = start; i < end; i++) {
             double ra = a[i];
             double rb = b[i];
-            double rc = c[i];
-            out[i] = trescaOf(x0 * ra + x1 * rb + x2 * rc, y0 * ra + y1 * rb + y2 * rc,
-                    z0 * ra + z1 * rb + z2 * rc);
+            double rc = cc[i];
+            double centre = c0 * ra + c1 * rb + c2 * rc;
+            double dd = d0 * ra + d1 * rb + d2 * rc;
+            double hh = h0 * ra + h1 * rb + h2 * rc;
+            double radius = Math.sqrt(dd * dd + hh * hh);
+            out[i] = vonMisesOf(centre + radius, centre - radius, k, nu);
         }
     }
 
-    /**
-     * Tresca in plane stress, R + max(R, |P|) with R = √(Q² + S²), the maximum written as
-     * (u + v + |u − v|)/2 (no {@code Math.max}, which is slow in loops on JDK 25).
-     */
-    static double trescaOf(double p, double q, double s) {
-        double radius = Math.sqrt(q * q + s * s);
-        double centre = Math.abs(p);
-        return radius + 0.5 * (radius + centre + Math.abs(radius - centre));
+    private static void trescaThree(double[] a, double[] b, double[] cc, double[] c,
+            double[] d, double[] h, double k, double nu, double[] out, int start, int end) {
+        final double c0 = c[0];
+        final double c1 = c[1];
+        final double c2 = c[2];
+        final double d0 = d[0];
+        final double d1 = d[1];
+        final double d2 = d[2];
+        final double h0 = h[0];
+        final double h1 = h[1];
+        final double h2 = h[2];
+        for (int i = start; i < end; i++) {
+            double ra = a[i];
+            double rb = b[i];
+            double rc = cc[i];
+            double centre = c0 * ra + c1 * rb + c2 * rc;
+            double dd = d0 * ra + d1 * rb + d2 * rc;
+            double hh = h0 * ra + h1 * rb + h2 * rc;
+            double radius = Math.sqrt(dd * dd + hh * hh);
+            out[i] = trescaOf(centre + radius, centre - radius, k, nu);
+        }
     }
+
+    // ---------------------------------------------------------------- any gauge count
 
     /** Any gauge count and any offsets: the dot products per sample, in index order. */
-    private static void general(Result result, double[][] r, int shift, double[] x,
-            double[] y, double[] z, double[] o1, double[] o2, double[] o3, int start, int end) {
+    private static void general(Result result, double[][] r, int shift, double[] c, double[] d,
+            double[] h, double k, double nu, double[] o1, double[] o2, double[] o3, int start,
+            int end) {
         int n = r.length;
         for (int i = start; i < end; i++) {
-            int k = i + shift;
-            double r0 = r[0][k];
-            double cx = x[0] * r0;
-            double cy = y[0] * r0;
-            double cz = z[0] * r0;
+            int m = i + shift;
+            double r0 = r[0][m];
+            double centre = c[0] * r0;
+            double dd = d[0] * r0;
+            double hh = h[0] * r0;
             for (int j = 1; j < n; j++) {
-                double rj = r[j][k];
-                cx += x[j] * rj;
-                cy += y[j] * rj;
-                cz += z[j] * rj;
+                double rj = r[j][m];
+                centre += c[j] * rj;
+                dd += d[j] * rj;
+                hh += h[j] * rj;
             }
+            double radius = Math.sqrt(dd * dd + hh * hh);
+            double p1 = centre + radius;
+            double p2 = centre - radius;
             switch (result) {
-                case CENTRE_AND_RADIUS: {
-                    double radius = Math.sqrt(cy * cy + cz * cz);
-                    o1[i] = cx + radius;
-                    o2[i] = cx - radius;
+                case STRAINS:
+                    o1[i] = p1;
+                    o2[i] = p2;
                     break;
-                }
                 case ANGLE:
-                    o1[i] = Rosette.principalAngle(cx, cy, cz);
+                    o1[i] = Rosette.principalAngle(centre, dd, hh);
                     break;
                 case STATE:
-                    o1[i] = cx + cy;
-                    o2[i] = cx - cy;
-                    o3[i] = 2 * cz;
+                    o1[i] = centre + dd;
+                    o2[i] = centre - dd;
+                    o3[i] = 2 * hh;
+                    break;
+                case STRESSES:
+                    o1[i] = s1Of(p1, p2, k, nu);
+                    o2[i] = s2Of(p1, p2, k, nu);
                     break;
                 case VON_MISES:
-                    o1[i] = Math.sqrt(cx * cx + 3 * (cy * cy + cz * cz));
+                    o1[i] = vonMisesOf(p1, p2, k, nu);
                     break;
                 default:
-                    o1[i] = trescaOf(cx, cy, cz);
+                    o1[i] = trescaOf(p1, p2, k, nu);
                     break;
             }
         }

@@ -21,15 +21,15 @@ import org.strainmath.quantity.Strain;
 public final class RosetteStrains {
 
     private final Rosette rosette;
-    private final double[] readings;
+    private final double[] centreDifferenceShear;   // C, D, H
     private final PlaneStrain state;
     private final PrincipalStrains principal;
     private final double[] residuals;
 
-    RosetteStrains(Rosette rosette, double[] readings, PlaneStrain state,
+    RosetteStrains(Rosette rosette, double[] centreDifferenceShear, PlaneStrain state,
             PrincipalStrains principal, double[] residuals) {
         this.rosette = rosette;
-        this.readings = readings;
+        this.centreDifferenceShear = centreDifferenceShear;
         this.state = state;
         this.principal = principal;
         this.residuals = residuals;
@@ -108,9 +108,9 @@ public final class RosetteStrains {
      * @throws IllegalStateException if the rosette has no material
      */
     public RosetteStresses stresses() {
-        double[][] rows = rosette.stressRows();
-        return RosetteStresses.of(rosette.material().orElseThrow(), rows, readings,
-                principal.angle());
+        double[] cdh = centreDifferenceShear;
+        return rosette.stresses(cdh[0], cdh[1], cdh[2], principal.e1().value(),
+                principal.e2().value(), principal.angle());
     }
 
     /**
@@ -120,15 +120,9 @@ public final class RosetteStrains {
      */
     public RosetteStresses stresses(IsotropicMaterial material) {
         Objects.requireNonNull(material, "material");
-        return rosette.withMaterial(material).reduce(strains()).stresses();
-    }
-
-    private Strain[] strains() {
-        Strain[] out = new Strain[readings.length];
-        for (int j = 0; j < readings.length; j++) {
-            out[j] = Strain.of(readings[j]);
-        }
-        return out;
+        double[] cdh = centreDifferenceShear;
+        return rosette.withMaterial(material).stresses(cdh[0], cdh[1], cdh[2],
+                principal.e1().value(), principal.e2().value(), principal.angle());
     }
 
     /** {@code RosetteStrains[PlaneStrain[...], PrincipalStrains[...]]}, with the RMS residual if fitted. */

@@ -13,7 +13,7 @@ import org.strainmath.quantity.Stress;
  * free surface under the gauges, σz = 0): the state, the principal stresses, the shears and the
  * von Mises and Tresca equivalent stresses.
  * <pre>
- *   σ1,2 = P ± R     P = E/(1 − ν)·(εx + εy)/2     R = √(((σx − σy)/2)² + τxy²)
+ *   σ1 = E/(1 − ν²)·(ε1 + ν·ε2)     σ2 = E/(1 − ν²)·(ε2 + ν·ε1)   (Hooke's law, principal axes)
  *   von Mises  σvm = √(σ1² − σ1·σ2 + σ2²)           (distortion energy, plane stress)
  *   Tresca     σT  = max(|σ1 − σ2|, |σ1|, |σ2|)      (largest shear × 2, with σ3 = 0)
  * </pre>
@@ -31,36 +31,30 @@ import org.strainmath.quantity.Stress;
 public final class RosetteStresses {
 
     private final IsotropicMaterial material;
-    private final double p;
-    private final double q;
-    private final double s;
+    private final double stiffness;   // E/(1 − ν²)
+    private final double poisson;
+    private final PlaneStress state;
+    private final double e1;
+    private final double e2;
     private final Optional<Angle> angle;
 
-    private RosetteStresses(IsotropicMaterial material, double p, double q, double s,
-            Optional<Angle> angle) {
+    RosetteStresses(IsotropicMaterial material, double stiffness, double poisson,
+            PlaneStress state, double e1, double e2, Optional<Angle> angle) {
         this.material = material;
-        this.p = p;
-        this.q = q;
-        this.s = s;
+        this.stiffness = stiffness;
+        this.poisson = poisson;
+        this.state = state;
+        this.e1 = e1;
+        this.e2 = e2;
         this.angle = angle;
     }
 
-    static RosetteStresses of(IsotropicMaterial material, double[][] rows, double[] readings,
-            Optional<Angle> angle) {
-        return new RosetteStresses(material, dot(rows[0], readings), dot(rows[1], readings),
-                dot(rows[2], readings), angle);
+    private double s1() {
+        return RosetteKernels.s1Of(e1, e2, stiffness, poisson);
     }
 
-    private static double dot(double[] row, double[] r) {
-        double sum = row[0] * r[0];
-        for (int j = 1; j < row.length; j++) {
-            sum += row[j] * r[j];
-        }
-        return sum;
-    }
-
-    private double radius() {
-        return Math.sqrt(q * q + s * s);
+    private double s2() {
+        return RosetteKernels.s2Of(e1, e2, stiffness, poisson);
     }
 
     /** The material the stresses were computed with. */
@@ -70,19 +64,17 @@ public final class RosetteStresses {
 
     /** The stress state σx, σy, τxy in the rosette's reference axes. */
     public PlaneStress stress() {
-        return new PlaneStress(p + q, p - q, s);
+        return state;
     }
 
     /** The in-plane principal stresses σ1 ≥ σ2 and their angle. */
     public PrincipalStresses principal() {
-        double radius = radius();
-        return new PrincipalStresses(Stress.ofPascals(p + radius), Stress.ofPascals(p - radius),
-                angle);
+        return new PrincipalStresses(Stress.ofPascals(s1()), Stress.ofPascals(s2()), angle);
     }
 
     /** The largest in-plane shear stress (σ1 − σ2)/2. */
     public Stress maximumInPlaneShear() {
-        return Stress.ofPascals(radius());
+        return Stress.ofPascals(0.5 * (s1() - s2()));
     }
 
     /**
@@ -90,22 +82,23 @@ public final class RosetteStresses {
      * half the Tresca stress (larger than the in-plane one when σ1 and σ2 have one sign).
      */
     public Stress absoluteMaximumShear() {
-        return Stress.ofPascals(0.5 * RosetteKernels.trescaOf(p, q, s));
+        return Stress.ofPascals(0.5 * RosetteKernels.trescaOf(e1, e2, stiffness, poisson));
     }
 
-    /** The von Mises equivalent stress √(σ1² − σ1σ2 + σ2²) = √(P² + 3R²). */
+    /** The von Mises equivalent stress √(σ1² − σ1σ2 + σ2²). */
     public Stress vonMises() {
-        return Stress.ofPascals(Math.sqrt(p * p + 3 * (q * q + s * s)));
+        return Stress.ofPascals(RosetteKernels.vonMisesOf(e1, e2, stiffness, poisson));
     }
 
     /** The Tresca equivalent stress max(|σ1 − σ2|, |σ1|, |σ2|). */
     public Stress tresca() {
-        return Stress.ofPascals(RosetteKernels.trescaOf(p, q, s));
+        return Stress.ofPascals(RosetteKernels.trescaOf(e1, e2, stiffness, poisson));
     }
 
     /** Mohr's circle of the in-plane stress state. */
     public MohrStressCircle mohrCircle() {
-        return new MohrStressCircle(Stress.ofPascals(p), Stress.ofPascals(radius()));
+        return new MohrStressCircle(Stress.ofPascals(0.5 * (s1() + s2())),
+                Stress.ofPascals(0.5 * (s1() - s2())));
     }
 
     /**

@@ -61,6 +61,13 @@ class RosetteKernelTest {
             assertThat(rosette.toPrincipalStresses(in, src, s1, s2, dst, len)).isEqualTo(1);
             assertThat(rosette.toVonMises(in, src, vm, dst, len)).isEqualTo(1);
             assertThat(rosette.toTresca(in, src, tr, dst, len)).isEqualTo(1);
+            double[] f1 = new double[len + 3];
+            double[] f2 = new double[len + 3];
+            double[] fvm = new double[len + 3];
+            assertThat(rosette.toPrincipalStrainsAndVonMises(in, src, f1, f2, fvm, dst, len)).isEqualTo(1);
+            assertThat(f1).isEqualTo(e1);
+            assertThat(f2).isEqualTo(e2);
+            assertThat(fvm).isEqualTo(vm);
             for (int i = 0; i < len; i++) {
                 if (i == 10) {
                     assertThat(e1[dst + i]).isNaN();
