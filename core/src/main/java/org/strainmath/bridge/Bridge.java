@@ -521,6 +521,25 @@ public final class Bridge {
         return new Bridge(arrangement, changed, armLeads, excitationLeads, 0.0);
     }
 
+    /**
+     * This bridge with the unstrained resistance of arm {@code arm} set to {@code resistance}:
+     * a gauge keeps its gauge factor and strain multiple; the leads, the excitation leads and
+     * the zero offset are kept. This is how a shunt resistor, or any change of one arm, is
+     * modelled exactly: {@code withArmResistance(1, r.inParallelWith(shunt)).zeroOutput()} is
+     * the reading with the shunt across the gauge.
+     *
+     * @throws NullPointerException      if {@code resistance} is null
+     * @throws IndexOutOfBoundsException if {@code arm} is not 1 to 4
+     * @throws IllegalArgumentException  if the resistance is not positive
+     */
+    public Bridge withArmResistance(int arm, Resistance resistance) {
+        Objects.checkIndex(arm - 1, 4);
+        Objects.requireNonNull(resistance, "resistance");
+        BridgeArm[] changed = arms.clone();
+        changed[arm - 1] = arms[arm - 1].withNominalResistance(resistance);
+        return new Bridge(arrangement, changed, armLeads, excitationLeads, offset);
+    }
+
     /** N and D at zero strain, with the nominal resistance of arm {@code index} set to x. */
     private BigDecimal[] zeroStrainTerms(int index, BigDecimal x) {
         BigDecimal[] r = new BigDecimal[4];

@@ -51,6 +51,9 @@ public final class StrainChannel {
     private final AdcInput input;
     private final double transverseRatio;        // NaN unless set
     private final double transverseFactor;       // 1 unless set
+    private final double spanFactor;             // 1 unless set
+    /** transverseFactor × spanFactor: the one factor the kernels apply. */
+    private final double factor;
     private final ThermalOutput thermalOutput;   // null unless set
     private final Temperature zeroTemperature;   // null unless set
     private final ThermalOutput.Correction thermal;
@@ -64,8 +67,9 @@ public final class StrainChannel {
     private final double high;
 
     private StrainChannel(Bridge bridge, AdcInput input, double transverseRatio,
-            ThermalOutput thermalOutput, Temperature zeroTemperature) {
+            ThermalOutput thermalOutput, Temperature zeroTemperature, double spanFactor) {
         this.bridge = bridge;
+        this.spanFactor = spanFactor;
         this.input = input;
         this.transverseRatio = transverseRatio;
         this.thermalOutput = thermalOutput;
@@ -79,6 +83,7 @@ public final class StrainChannel {
         this.transverseFactor = Double.isNaN(transverseRatio) ? 1.0
                 : (1 - gauge.calibrationPoissonRatio() * gauge.transverseSensitivity())
                         / (1 + gauge.transverseSensitivity() * transverseRatio);
+        this.factor = transverseFactor * spanFactor;
         this.thermal = thermalOutput == null ? null
                 : thermalOutput.zeroedAt(zeroTemperature, bridge.gaugeFactor());
         this.drift = thermal == null ? 0.0 : gauge.gaugeFactorDriftPerKelvin();
@@ -102,7 +107,7 @@ public final class StrainChannel {
     public static StrainChannel of(Bridge bridge, AdcInput input) {
         Objects.requireNonNull(bridge, "bridge");
         Objects.requireNonNull(input, "input");
-        return new StrainChannel(bridge, input, Double.NaN, null, null);
+        return new StrainChannel(bridge, input, Double.NaN, null, null, 1.0);
     }
 
     /**
@@ -138,7 +143,7 @@ public final class StrainChannel {
                     + transverseToAxialRatio);
         }
         return new StrainChannel(bridge, input, transverseToAxialRatio + 0.0, thermalOutput,
-                zeroTemperature);
+                zeroTemperature, spanFactor);
     }
 
     /**
@@ -158,7 +163,25 @@ public final class StrainChannel {
     public StrainChannel withThermalOutput(ThermalOutput curve, Temperature zeroTemperature) {
         Objects.requireNonNull(curve, "curve");
         Objects.requireNonNull(zeroTemperature, "zeroTemperature");
-        return new StrainChannel(bridge, input, transverseRatio, curve, zeroTemperature);
+        return new StrainChannel(bridge, input, transverseRatio, curve, zeroTemperature, spanFactor);
+    }
+
+    /**
+     * A copy whose strains are multiplied by {@code factor}, the span correction that a shunt
+     * check gives (expected over measured equivalent strain; see the calibration module's
+     * shunt check). Applied with the transverse factor, before the thermal correction; replaces
+     * an earlier span correction.
+     *
+     * @throws IllegalArgumentException if {@code factor} is not positive and finite
+     */
+    public StrainChannel withSpanCorrection(double factor) {
+        return new StrainChannel(bridge, input, transverseRatio, thermalOutput, zeroTemperature,
+                Checks.positiveFinite(factor, "factor"));
+    }
+
+    /** The span correction factor (1 unless one was set). */
+    public double spanCorrection() {
+        return spanFactor;
     }
 
     /**
@@ -192,7 +215,8 @@ public final class StrainChannel {
     }
 
     private StrainChannel withBridge(Bridge zeroed) {
-        return new StrainChannel(zeroed, input, transverseRatio, thermalOutput, zeroTemperature);
+        return new StrainChannel(zeroed, input, transverseRatio, thermalOutput, zeroTemperature,
+                spanFactor);
     }
 
     /** The bridge of this channel. */
@@ -257,7 +281,7 @@ public final class StrainChannel {
      * set, is not applied (use {@link #toStrain(long, double)}).
      */
     public double toStrain(long code) {
-        return bridge.toStrainWithin(code * scale + offset, low, high) * transverseFactor;
+        return bridge.toStrainWithin(code * scale + offset, low, high) * factor;
     }
 
     /**
@@ -355,7 +379,7 @@ public final class StrainChannel {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
             bridge.codesToStrainWithin(codes, shift, scale, offset, dst, start, stop, low, high,
-                    transverseFactor);
+                    factor);
             nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff);
         }
         return nan;
@@ -390,7 +414,7 @@ public final class StrainChannel {
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            bridge.toStrainWithin(dst, dst, start, stop, low, high, transverseFactor);
+            bridge.toStrainWithin(dst, dst, start, stop, low, high, factor);
             nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff);
         }
         return nan;
@@ -435,6 +459,7 @@ public final class StrainChannel {
      *   leads       arm 1 1.72414 Ω, arm 2 1.72414 Ω; desensitisation 0.995098
      *   converter   24 bits, two's complement, gain 128.0, ratiometric, 9.31323e-7 mV/V per code
      *   transverse  εt/εa = -0.29, factor 1.00003
+     *   span        not corrected
      *   thermal     -28.4 + 2.05·T - 0.047·T² µε, T in °C, at K=2.0; zeroed at 22.0 °C
      *   zero        offset -0.00199303 mV/V subtracted
      *   resolution  0.00179983 µε per code
@@ -453,6 +478,8 @@ public final class StrainChannel {
         line(text, "transverse", Double.isNaN(transverseRatio) ? "not corrected"
                 : "εt/εa = " + Format.number(transverseRatio) + ", factor "
                         + Format.number(transverseFactor));
+        line(text, "span", spanFactor == 1.0 ? "not corrected"
+                : "×" + Format.number(spanFactor));
         line(text, "thermal", thermal == null ? "not corrected"
                 : inside(thermalOutput.toString()) + "; zeroed at " + zeroTemperature);
         double zero = bridge.zeroingOffset();

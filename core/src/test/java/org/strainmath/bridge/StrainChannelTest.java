@@ -203,9 +203,11 @@ class StrainChannelTest {
                         + " 9.31323e-7 mV/V per code",
                 "  transverse  εt/εa = -0.3, factor "
                         + org.strainmath.internal.Format.number((1 - 0.285 * 0.015) / (1 - 0.015 * 0.3)),
+                "  span        not corrected",
                 "  thermal     -30.0 + 2.1·T µε, T in °C, at K=2.0; zeroed at 21.0 °C",
                 "  zero        output at zero strain 0.0 mV/V",
                 "  resolution  " + ADC.strainPerCode(WIRED) + " per code"));
+        assertThat(channel.withSpanCorrection(1.0125).toString()).contains("  span        ×1.0125\n");
         assertThat(channel.zeroedByOffsetAt(ZERO_CODE).toString())
                 .contains("  zero        offset " + VoltageRatio.ofVoltsPerVolt(ADC.toRatio(ZERO_CODE))
                         + " subtracted");
@@ -300,5 +302,35 @@ class StrainChannelTest {
                 .toStrain(ADC.toRatio(code));
         assertThat(channel.toStrain(code, celsius))
                 .isCloseTo(expected, within(Math.abs(expected) * 1e-12 + 1e-18));
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(booleans = {true, false})
+    void aSpanCorrectionScalesTheBridgeStrainBeforeTheThermalCorrection(boolean oneLoop) {
+        // Definition (common practice, no source): the corrected strain is factor × the strain
+        // the channel gave, before thermal output is subtracted; both loop structures agree.
+        ThermalOutput curve = ThermalOutput.ofCelsius(-30, 2.1, -0.045);
+        StrainChannel plain = StrainChannel.of(WIRED, ADC).withTransverseCorrection(-0.3)
+                .zeroedByOffsetAt(ZERO_CODE);
+        StrainChannel spanned = plain.withSpanCorrection(1.02);
+        assertThat(spanned.spanCorrection()).isEqualTo(1.02);
+        assertThat(plain.spanCorrection()).isEqualTo(1.0);
+        for (int code : new int[] {-400_000, 50_000, 2_000_000}) {
+            assertThat(spanned.toStrain(code)).isCloseTo(plain.toStrain(code) * 1.02,
+                    within(Math.abs(plain.toStrain(code)) * 1e-15));
+        }
+        StrainChannel both = spanned.withThermalOutput(curve, Temperature.ofCelsius(21));
+        double thermal = curve.apparentStrainAt(Temperature.ofCelsius(70), 2.1).value()
+                - curve.apparentStrainAt(Temperature.ofCelsius(21), 2.1).value();
+        assertThat(both.toStrain(900_000, 70.0))
+                .isCloseTo(plain.toStrain(900_000) * 1.02 - thermal, within(1e-15));
+        int[] codes = {-400_000, 50_000, 2_000_000, 900_000};
+        double[] out = new double[4];
+        spanned.convert(codes, 0, null, 0, out, 0, 4, oneLoop);
+        for (int i = 0; i < 4; i++) {
+            assertThat(out[i]).isEqualTo(spanned.toStrain(codes[i]));
+        }
+        assertThatThrownBy(() -> plain.withSpanCorrection(0)).hasMessage("factor must be > 0 and finite: 0.0");
+        assertThatThrownBy(() -> plain.withSpanCorrection(Double.NaN)).hasMessage("factor must be > 0 and finite: NaN");
     }
 }
