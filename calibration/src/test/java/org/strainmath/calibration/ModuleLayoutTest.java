@@ -8,11 +8,11 @@ import java.lang.module.ModuleDescriptor.Requires;
 import org.junit.jupiter.api.Test;
 import org.strainmath.quantity.Strain;
 
-/** The module stands on core, as the layering of the design says, and exports nothing yet. */
+/** The module stands on core, as the layering of the design says, and exports its API package. */
 class ModuleLayoutTest {
 
     @Test
-    void moduleReadsCoreTransitivelyAndExportsNothingYet() {
+    void moduleReadsCoreTransitivelyAndExportsItsApi() {
         ModuleDescriptor descriptor = ModuleLayoutTest.class.getModule().getDescriptor();
         assertThat(descriptor).as("tests run on the module path").isNotNull();
         assertThat(descriptor.name()).isEqualTo("org.strainmath.calibration");
@@ -20,7 +20,8 @@ class ModuleLayoutTest {
                 .filteredOn(r -> r.name().equals("org.strainmath.core"))
                 .singleElement()
                 .satisfies(r -> assertThat(r.modifiers()).contains(Requires.Modifier.TRANSITIVE));
-        assertThat(descriptor.exports()).isEmpty();
+        assertThat(descriptor.exports()).extracting(ModuleDescriptor.Exports::source)
+                .containsExactly("org.strainmath.calibration");
     }
 
     @Test

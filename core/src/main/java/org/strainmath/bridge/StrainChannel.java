@@ -179,6 +179,14 @@ public final class StrainChannel {
                 Checks.positiveFinite(factor, "factor"));
     }
 
+    /**
+     * The transverse-sensitivity factor the channel applies,
+     * (1 − ν0·Kt)/(1 + Kt·εt/εa), or 1 without that correction.
+     */
+    public double transverseFactor() {
+        return transverseFactor;
+    }
+
     /** The span correction factor (1 unless one was set). */
     public double spanCorrection() {
         return spanFactor;
