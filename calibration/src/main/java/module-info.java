@@ -2,11 +2,14 @@
  * strainmath calibration: shunt calibration, calibration fitting, transducer performance and
  * measurement uncertainty, on the bridges of {@code org.strainmath.core}.
  *
- * <p>Exported: {@link org.strainmath.calibration}. Apache Commons Math is on the dependency
- * list for the fits to come.
+ * <p>Exported: {@link org.strainmath.calibration}. Apache Commons Math does the QR
+ * decomposition and the distributions; SLF4J carries one warning, for a fit of a degree above
+ * three.
  */
 module org.strainmath.calibration {
     requires transitive org.strainmath.core;
+    requires commons.math3;
+    requires org.slf4j;
 
     exports org.strainmath.calibration;
 }
