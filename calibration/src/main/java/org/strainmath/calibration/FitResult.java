@@ -284,6 +284,16 @@ public final class FitResult {
     }
 
     /**
+     * The standard uncertainty of the fitted (mean) reading at {@code load}, √(gᵀ·Cov·g), from
+     * the coefficients' covariance (GUM H.3 gives it for its thermometer calibration).
+     *
+     * @throws IllegalArgumentException if {@code load} is not finite
+     */
+    public double standardUncertaintyAt(double load) {
+        return Math.sqrt(predictionVariance(Checks.finite(load, "load")));
+    }
+
+    /**
      * The confidence interval of the mean reading at {@code load}, at {@code probability}.
      *
      * @throws IllegalArgumentException if {@code load} is not finite or the probability not in (0, 1)

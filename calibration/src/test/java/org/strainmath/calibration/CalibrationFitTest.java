@@ -81,6 +81,35 @@ class CalibrationFitTest {
         assertThat(fit.rawConditionNumber()).isGreaterThan(1e10);
     }
 
+    @Test
+    void theThermometerCalibrationOfGumAnnexH3() {
+        // JCGM 100:2008 (GUM), H.3: b(t) = y1 + y2·(t − t0), t0 = 20 °C, fitted to eleven
+        // readings; printed: y1 = −0.1712 °C, u = 0.0029 °C; y2 = 0.00218, u = 0.00067;
+        // r(y1, y2) = −0.930; b(30 °C) = −0.1494 °C with u = 0.0041 °C. (The issue lists the
+        // data and the printed results.)
+        double[] t = {21.521, 22.012, 22.512, 23.003, 23.507, 23.999, 24.513, 25.002, 25.503,
+            26.010, 26.511};
+        double[] b = {-0.171, -0.169, -0.166, -0.159, -0.164, -0.165, -0.156, -0.157, -0.159,
+            -0.161, -0.160};
+        double[] x = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            x[i] = t[i] - 20;
+        }
+        FitResult fit = CalibrationFit.of(x, b).fit();
+        double[] c = fit.coefficients();
+        double[] u = fit.standardErrors();
+        assertThat(c[0]).isCloseTo(-0.1712, within(0.00005));
+        assertThat(u[0]).isCloseTo(0.0029, within(0.00005));
+        assertThat(c[1]).isCloseTo(0.00218, within(0.000005));
+        assertThat(u[1]).isCloseTo(0.00067, within(0.000005));
+        double r = fit.covariance()[0][1] / (u[0] * u[1]);
+        assertThat(r).isCloseTo(-0.930, within(0.0005));
+        double at30 = fit.readingAt(10);
+        assertThat(at30).isCloseTo(-0.1494, within(0.00005));
+        // The GUM's u(b(30 °C)) is the standard uncertainty of the fitted curve, √(gᵀ·Cov·g).
+        assertThat(fit.standardUncertaintyAt(10)).isCloseTo(0.0041, within(0.00005));
+    }
+
     static Stream<Arguments> randomData() {
         SplittableRandom random = new SplittableRandom(0xF17);
         return Stream.generate(() -> {
