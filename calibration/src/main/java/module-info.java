@@ -2,7 +2,7 @@
  * strainmath calibration: shunt calibration, calibration fitting, transducer performance and
  * measurement uncertainty, on the bridges of {@code org.strainmath.core}.
  *
- * <p>Exported: {@link org.strainmath.calibration}. Apache Commons Math does the QR
+ * <p>Exported: {@link org.strainmath.calibration} and {@link org.strainmath.uncertainty}. Apache Commons Math does the QR
  * decomposition and the distributions; SLF4J carries one warning, for a fit of a degree above
  * three.
  */
@@ -12,4 +12,5 @@ module org.strainmath.calibration {
     requires org.slf4j;
 
     exports org.strainmath.calibration;
+    exports org.strainmath.uncertainty;
 }

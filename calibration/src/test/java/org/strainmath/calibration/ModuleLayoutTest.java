@@ -21,7 +21,7 @@ class ModuleLayoutTest {
                 .singleElement()
                 .satisfies(r -> assertThat(r.modifiers()).contains(Requires.Modifier.TRANSITIVE));
         assertThat(descriptor.exports()).extracting(ModuleDescriptor.Exports::source)
-                .containsExactly("org.strainmath.calibration");
+                .containsExactlyInAnyOrder("org.strainmath.calibration", "org.strainmath.uncertainty");
     }
 
     @Test
