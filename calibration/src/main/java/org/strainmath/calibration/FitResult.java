@@ -8,6 +8,8 @@ import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
+import org.strainmath.uncertainty.InputQuantity;
+import org.strainmath.uncertainty.UncertaintyBudget;
 
 /**
  * The result of a {@link CalibrationFit}: coefficients in the user's units with their standard
@@ -401,6 +403,31 @@ public final class FitResult {
                 sign = Math.signum(slope);
             }
         }
+    }
+
+    /**
+     * The uncertainty budget of a load measured with this calibration: the load x that gives
+     * {@code reading}, x = ŷ⁻¹(r − δ), with two inputs, the reading (as given) and δ, the
+     * uncertainty of the fitted curve at that load ({@link #standardUncertaintyAt}, with the
+     * fit's n − p degrees of freedom). To first order (GUM 5.1.2)
+     * <pre>
+     *   u(x)² = (u(r)² + u_fit(x)²) / (dŷ/dx)²
+     * </pre>
+     * The load must lie inside the calibrated range (see {@link #loadAt(double)}).
+     *
+     * @throws NullPointerException     if {@code reading} is null
+     * @throws IllegalArgumentException if the reading lies outside the calibrated range
+     */
+    public UncertaintyBudget loadBudget(InputQuantity reading) {
+        double load = loadAt(reading.estimate());
+        InputQuantity curve = InputQuantity.ofStandardUncertainty("calibration curve", 0,
+                standardUncertaintyAt(load)).withDegreesOfFreedom(freedom);
+        return UncertaintyBudget.of(x -> loadAt(x[0] - x[1], true), reading, curve);
+    }
+
+    /** The slope dŷ/dx of the fitted curve at {@code load}. */
+    public double slopeAt(double load) {
+        return derivative(Checks.finite(load, "load"));
     }
 
     /** dŷ/dx = (1/s)·Σ k·b_k·u^(k−1) over the powers k of u in the fit. */

@@ -216,6 +216,25 @@ class CalibrationFitTest {
     }
 
     @Test
+    void theLoadBudgetIsTheFirstOrderClosedForm() throws IOException {
+        // u(x)² = (u(r)² + u_fit(x)²)/(dŷ/dx)² (GUM 5.1.2 applied to x = ŷ⁻¹(r − δ)).
+        double[][] data = pontius();
+        FitResult fit = CalibrationFit.of(data[0], data[1]).withDegree(2).fit();
+        org.strainmath.uncertainty.InputQuantity reading =
+                org.strainmath.uncertainty.InputQuantity.ofStandardUncertainty("deflection", 1.2, 2e-4);
+        org.strainmath.uncertainty.UncertaintyResult r = fit.loadBudget(reading).evaluate(0.95);
+        double load = fit.loadAt(1.2);
+        double slope = fit.slopeAt(load);
+        double expected = Math.sqrt(4e-8 + Math.pow(fit.standardUncertaintyAt(load), 2)) / slope;
+        assertThat(r.estimate()).isCloseTo(load, within(load * 1e-12));
+        assertThat(r.combinedStandardUncertainty()).isCloseTo(expected, within(expected * 1e-6));
+        // The slope of Pontius' quadratic: c1 + 2·c2·x.
+        double[] c = fit.coefficients();
+        assertThat(slope).isCloseTo(c[1] + 2 * c[2] * load, within(Math.abs(slope) * 1e-10));
+        assertThat(r.contributions()).hasSize(2);
+    }
+
+    @Test
     void badDataIsRefusedBeforeAnythingIsComputed() {
         assertThatThrownBy(() -> CalibrationFit.of(new double[] {1, 2}, new double[] {1}))
                 .hasMessage("loads and readings must have the same length: 2 and 1");
