@@ -207,18 +207,29 @@ public final class TransducerCalibration {
         return percent(worst);
     }
 
+    /** The loads and readings of every ascending run, one after the other: {loads, readings}. */
+    private double[][] ascendingPoints() {
+        List<CalibrationRun> up = ascending();
+        int n = 0;
+        for (CalibrationRun run : up) {
+            n += run.rawLoads().length;
+        }
+        double[][] points = new double[2][n];
+        int k = 0;
+        for (CalibrationRun run : up) {
+            int m = run.rawLoads().length;
+            System.arraycopy(run.rawLoads(), 0, points[0], k, m);
+            System.arraycopy(run.rawReadings(), 0, points[1], k, m);
+            k += m;
+        }
+        return points;
+    }
+
     /** Nonlinearity against the best-fit straight line of all ascending readings, % of rated output. */
     public double nonlinearityBestFitPercent() {
-        List<Double> xs = new ArrayList<>();
-        List<Double> ys = new ArrayList<>();
-        for (CalibrationRun run : ascending()) {
-            for (int i = 0; i < run.rawLoads().length; i++) {
-                xs.add(run.rawLoads()[i]);
-                ys.add(run.rawReadings()[i]);
-            }
-        }
-        double[] x = xs.stream().mapToDouble(Double::doubleValue).toArray();
-        double[] y = ys.stream().mapToDouble(Double::doubleValue).toArray();
+        double[][] points = ascendingPoints();
+        double[] x = points[0];
+        double[] y = points[1];
         if (x.length < 3) {
             return 0;   // a line through two points is exact
         }
@@ -321,16 +332,8 @@ public final class TransducerCalibration {
      * @throws IllegalArgumentException if the degree is not 1 to 3 or the points too few
      */
     public double lowerLimitFactor(int degree) {
-        List<Double> xs = new ArrayList<>();
-        List<Double> ys = new ArrayList<>();
-        for (CalibrationRun run : ascending()) {
-            for (int i = 0; i < run.rawLoads().length; i++) {
-                xs.add(run.rawLoads()[i]);
-                ys.add(run.rawReadings()[i]);
-            }
-        }
-        FitResult fit = CalibrationFit.of(xs.stream().mapToDouble(Double::doubleValue).toArray(),
-                ys.stream().mapToDouble(Double::doubleValue).toArray()).withDegree(degree).fit();
+        double[][] points = ascendingPoints();
+        FitResult fit = CalibrationFit.of(points[0], points[1]).withDegree(degree).fit();
         return 2.4 * fit.residualStandardDeviation() / Math.abs(sensitivity());
     }
 
