@@ -159,7 +159,7 @@ class CalibrationFitTest {
         }
         for (int j = 0; j < p; j++) {
             assertThat(c[j]).isCloseTo(expected[j], within(scale * 1e-10));
-            assertThat(se[j]).isCloseTo(expectedErrors[j], within(expectedErrors[j] * 1e-9));
+            assertThat(se[j]).isCloseTo(expectedErrors[j], within(expectedErrors[j] * 1e-10));
         }
         assertThat(fit.residualStandardDeviation())
                 .isCloseTo(Math.sqrt(ols.estimateErrorVariance()), within(1e-10));
