@@ -24,12 +24,14 @@ import org.strainmath.quantity.Resistance;
  *       rebuilt with the leads scaled, through its exact equation;
  *   <li><i>temperature</i>: for a channel with a thermal-output correction, the temperature of
  *       the reading and its standard uncertainty in K (normal); the correction's change with
- *       temperature is added to the strain.
+ *       temperature is added to the strain;
+ *   <li><i>transverse sensitivity</i>: for a channel with a transverse correction, the standard
+ *       uncertainty of Kt; the correction factor is re-evaluated.
  * </ul>
  * The model is first-order in the thermal part (the correction is taken at the strain of the
  * nominal channel) and exact otherwise. Sources not entered are not in the budget: a budget is
- * only as complete as its inputs. Transverse sensitivity, the stability of the gauge and the
- * installation (bond, alignment) are for the user to add as inputs of their own.
+ * only as complete as its inputs. The stability of the gauge and the installation (bond,
+ * alignment) are for the user to add as inputs of their own.
  *
  * <p>Immutable and thread-safe.
  */
@@ -113,6 +115,31 @@ public final class ChannelBudget {
     }
 
     /**
+     * A copy with the standard uncertainty {@code kt} of the gauge's transverse sensitivity Kt
+     * (as a fraction: 0.002 for 0.2 %), for a channel with a transverse correction: the
+     * correction factor (1 − ν0·Kt)/(1 + Kt·εt/εa) is re-evaluated at the drawn Kt.
+     *
+     * @throws IllegalStateException    if the channel has no transverse correction
+     * @throws IllegalArgumentException if the uncertainty is negative
+     */
+    public ChannelBudget withTransverseSensitivityUncertainty(double kt) {
+        if (channel.transverseRatio().isEmpty()) {
+            throw new IllegalStateException("the channel has no transverse correction");
+        }
+        return with(InputQuantity.ofStandardUncertainty("transverse sensitivity Kt",
+                gauge().transverseSensitivity(), kt));
+    }
+
+    private org.strainmath.bridge.StrainGauge gauge() {
+        for (int arm = 1; arm <= 4; arm++) {
+            if (channel.bridge().arm(arm).isActive()) {
+                return channel.bridge().arm(arm).gauge().orElseThrow();
+            }
+        }
+        throw new AssertionError("a bridge has an active arm");
+    }
+
+    /**
      * A copy for a reading at {@code celsius} °C known to {@code standardUncertainty} K, for a
      * channel with a thermal-output correction.
      *
@@ -148,6 +175,9 @@ public final class ChannelBudget {
         int gain = names.indexOf("gain, relative");
         int leads = names.indexOf("lead resistance, relative");
         int temperature = names.indexOf("temperature, °C");
+        int transverse = names.indexOf("transverse sensitivity Kt");
+        double nu0 = gauge().calibrationPoissonRatio();
+        double rho = channel.transverseRatio().orElse(0);
         Bridge bridge = channel.bridge();
         double perCode = channel.input().ratioPerCode().toVoltsPerVolt();
         double ratio = channel.input().toRatio(code);
@@ -157,6 +187,10 @@ public final class ChannelBudget {
             double r = (ratio + codes * perCode) / (gain < 0 ? 1 : x[gain]);
             Bridge b = leads < 0 ? bridge : scaledLeads(bridge, x[leads]);
             double strain = b.toStrain(r) * constant / (factor < 0 ? 1 : x[factor]);
+            if (transverse >= 0) {
+                double k = x[transverse];
+                strain *= (1 - nu0 * k) / (1 + k * rho) / channel.transverseFactor();
+            }
             if (temperature >= 0) {
                 strain += channel.toStrain(code, x[temperature]) - channel.toStrain(code);
             }

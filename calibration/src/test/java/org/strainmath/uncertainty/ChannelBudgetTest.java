@@ -85,4 +85,20 @@ class ChannelBudgetTest {
         assertThatThrownBy(() -> ChannelBudget.of(CHANNEL, CODE).withNoise(-1))
                 .hasMessage("rmsCodes must be >= 0 and finite: -1.0");
     }
+
+    @Test
+    void transverseSensitivityActsThroughTheCorrectionFactor() {
+        // f(Kt) = (1 − ν0·Kt)/(1 + Kt·ρ) (ASTM E251 model, StrainGauge): the contribution is
+        // |ε·d ln f/dKt|·u = |ε·(−ν0/(1 − ν0Kt) − ρ/(1 + Kt·ρ))|·u, by hand.
+        StrainGauge gauge = StrainGauge.ofOhms(350, 2.0).withTransverseSensitivity(0.01);
+        StrainChannel corrected = StrainChannel.of(Bridge.quarter(gauge), ADC).withTransverseCorrection(-0.3);
+        UncertaintyResult r = ChannelBudget.of(corrected, CODE).withTransverseSensitivityUncertainty(0.003)
+                .budget().evaluate(0.95);
+        double strain = corrected.toStrain(CODE);
+        double slope = -0.285 / (1 - 0.285 * 0.01) + 0.3 / (1 - 0.01 * 0.3);
+        assertThat(share(r, "transverse sensitivity Kt")).isCloseTo(Math.abs(strain * slope) * 0.003,
+                within(Math.abs(strain * slope) * 0.003 * 1e-4));
+        assertThatThrownBy(() -> ChannelBudget.of(CHANNEL, CODE).withTransverseSensitivityUncertainty(0.003))
+                .isInstanceOf(IllegalStateException.class).hasMessage("the channel has no transverse correction");
+    }
 }

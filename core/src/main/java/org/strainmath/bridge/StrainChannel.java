@@ -187,6 +187,12 @@ public final class StrainChannel {
         return transverseFactor;
     }
 
+    /** The transverse-to-axial strain ratio εt/εa of the transverse correction, if one is set. */
+    public java.util.OptionalDouble transverseRatio() {
+        return Double.isNaN(transverseRatio) ? java.util.OptionalDouble.empty()
+                : java.util.OptionalDouble.of(transverseRatio);
+    }
+
     /** The span correction factor (1 unless one was set). */
     public double spanCorrection() {
         return spanFactor;

@@ -317,6 +317,8 @@ class StrainChannelTest {
         assertThat(plain.spanCorrection()).isEqualTo(1.0);
         assertThat(plain.transverseFactor()).isEqualTo((1 - 0.285 * 0.015) / (1 - 0.015 * 0.3));
         assertThat(StrainChannel.of(WIRED, ADC).transverseFactor()).isEqualTo(1.0);
+        assertThat(plain.transverseRatio()).hasValue(-0.3);
+        assertThat(StrainChannel.of(WIRED, ADC).transverseRatio()).isEmpty();
         for (int code : new int[] {-400_000, 50_000, 2_000_000}) {
             assertThat(spanned.toStrain(code)).isCloseTo(plain.toStrain(code) * 1.02,
                     within(Math.abs(plain.toStrain(code)) * 1e-15));
