@@ -8,6 +8,7 @@
  */
 module org.strainmath.calibration {
     requires transitive org.strainmath.core;
+    requires transitive org.strainmath.rosette;
     requires commons.math3;
     requires org.slf4j;
 
