@@ -18,6 +18,8 @@ import org.strainmath.quantity.Resistance;
  *       depends on K·ε only, so the strain scales as K0/K exactly;
  *   <li><i>gain</i>: the accuracy of the amplifier and converter span, in % (rectangular
  *       half-width), which scales the reading;
+ *   <li><i>excitation</i>: for a converter that measures absolute voltage, the accuracy of the
+ *       excitation in % (rectangular), which scales the reading likewise;
  *   <li><i>resolution</i>: ± half a code (rectangular), always in the budget;
  *   <li><i>noise</i>: an RMS noise in codes (normal);
  *   <li><i>lead resistance</i>: a relative uncertainty of every lead, in % (normal); the bridge is
@@ -91,6 +93,23 @@ public final class ChannelBudget {
      */
     public ChannelBudget withGainAccuracy(double percent) {
         return with(InputQuantity.rectangular("gain, relative", 1,
+                Checks.nonNegativeFinite(percent, "percent") / 100));
+    }
+
+    /**
+     * A copy with the accuracy of the excitation voltage, ± {@code percent} (rectangular), for
+     * a converter that measures absolute voltage: the ratio the channel computes scales with the
+     * excitation it assumes. A ratiometric converter measures against the excitation itself, so
+     * its accuracy cancels there.
+     *
+     * @throws IllegalStateException    if the channel's converter is ratiometric
+     * @throws IllegalArgumentException if the accuracy is negative
+     */
+    public ChannelBudget withExcitationAccuracy(double percent) {
+        if (channel.input().isRatiometric()) {
+            throw new IllegalStateException("the excitation cancels in a ratiometric channel");
+        }
+        return with(InputQuantity.rectangular("excitation, relative", 1,
                 Checks.nonNegativeFinite(percent, "percent") / 100));
     }
 
@@ -173,6 +192,7 @@ public final class ChannelBudget {
         int noise = names.indexOf("noise, codes");
         int factor = names.indexOf("gauge factor, relative");
         int gain = names.indexOf("gain, relative");
+        int excitation = names.indexOf("excitation, relative");
         int leads = names.indexOf("lead resistance, relative");
         int temperature = names.indexOf("temperature, °C");
         int transverse = names.indexOf("transverse sensitivity Kt");
@@ -184,7 +204,8 @@ public final class ChannelBudget {
         double constant = channel.transverseFactor() * channel.spanCorrection();
         MeasurementModel model = x -> {
             double codes = x[resolution] + (noise < 0 ? 0 : x[noise]);
-            double r = (ratio + codes * perCode) / (gain < 0 ? 1 : x[gain]);
+            double r = (ratio + codes * perCode) / (gain < 0 ? 1 : x[gain])
+                    / (excitation < 0 ? 1 : x[excitation]);
             Bridge b = leads < 0 ? bridge : scaledLeads(bridge, x[leads]);
             double strain = b.toStrain(r) * constant / (factor < 0 ? 1 : x[factor]);
             if (transverse >= 0) {

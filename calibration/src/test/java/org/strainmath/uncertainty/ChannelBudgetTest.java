@@ -101,4 +101,23 @@ class ChannelBudgetTest {
         assertThatThrownBy(() -> ChannelBudget.of(CHANNEL, CODE).withTransverseSensitivityUncertainty(0.003))
                 .isInstanceOf(IllegalStateException.class).hasMessage("the channel has no transverse correction");
     }
+
+    @Test
+    void excitationCountsOnlyForAnAbsoluteConverter() {
+        // An absolute converter computes the ratio with the excitation it assumes: ±0.2 % of
+        // excitation is u = 0.002/√3 of the reading, so of the strain to first order (to the
+        // bridge's nonlinearity, 0.2 % here). Ratiometric: it cancels (common practice).
+        AdcInput absolute = AdcInput.absolute(24, 128, org.strainmath.quantity.Voltage.ofVolts(2.5),
+                org.strainmath.quantity.Voltage.ofVolts(5));
+        StrainChannel channel = StrainChannel.of(QUARTER, absolute);
+        long code = Math.round(0.5e-3 / absolute.ratioPerCode().toVoltsPerVolt());
+        UncertaintyResult r = ChannelBudget.of(channel, code).withExcitationAccuracy(0.2).budget()
+                .evaluate(0.95);
+        double strain = channel.toStrain(code);
+        assertThat(share(r, "excitation, relative"))
+                .isCloseTo(strain * 0.002 / Math.sqrt(3), within(strain * 0.002 / Math.sqrt(3) * 0.01));
+        assertThatThrownBy(() -> ChannelBudget.of(CHANNEL, CODE).withExcitationAccuracy(0.2))
+                .isInstanceOf(IllegalStateException.class)
+                .hasMessage("the excitation cancels in a ratiometric channel");
+    }
 }
