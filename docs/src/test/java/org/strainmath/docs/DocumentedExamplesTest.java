@@ -35,6 +35,8 @@ class DocumentedExamplesTest {
     /** The docs module's folder (Surefire runs in it) and the repository above it. */
     private static final Path MODULE = Path.of("").toAbsolutePath();
     private static final Path REPOSITORY = MODULE.getParent();
+    /** The JShell startup script of the guide. */
+    private static final Path STARTUP = MODULE.resolve("jshell/strainmath.jsh");
 
     static Stream<Path> pages() throws IOException {
         List<Path> pages = new ArrayList<>();
@@ -63,6 +65,10 @@ class DocumentedExamplesTest {
                 shell.addToClasspath(entry);
             }
             System.setOut(capture);
+            if (page.getFileName().toString().equals("jshell.md")) {
+                // The page documents the startup script: run it first, as jshell --startup does.
+                run(shell, new MarkdownExamples.Block(STARTUP, 1, "java", Files.readString(STARTUP), null));
+            }
             for (MarkdownExamples.Block block : java) {
                 buffer.reset();
                 run(shell, block);
