@@ -82,6 +82,29 @@ public class RosetteBenchmark {
     }
 
     @Benchmark
+    public double[] floorOneSquareRoot() {
+        double[] a = readings[0];
+        double[] b = readings[1];
+        double[] c = readings[2];
+        double[] x = e1;
+        double[] y = e2;
+        for (int i = 0; i < a.length; i++) {
+            double p = a[i];
+            double q = b[i];
+            double r = c[i];
+            double root = Math.sqrt(p * p + q * q);
+            x[i] = r + root;
+            y[i] = r - root;
+        }
+        return y;
+    }
+
+    @Benchmark
+    public int principalStrains() {
+        return rosette.toPrincipalStrains(readings, 0, e1, e2, 0, size);
+    }
+
+    @Benchmark
     public int principalAndVonMises() {
         return rosette.toPrincipalStrainsAndVonMises(readings, 0, e1, e2, vonMises, 0, size);
     }

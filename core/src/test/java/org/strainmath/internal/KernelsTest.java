@@ -64,6 +64,11 @@ class KernelsTest {
         assertThat(Kernels.countNaNRows(a, b, c, 0, 40)).isEqualTo(3);
         assertThat(Kernels.countNaNRows(a, b, c, 4, 36)).isEqualTo(2);
         assertThat(Kernels.countNaNRows(a, b, c, 18, 21)).isZero();
+        // The two-array form: rows 3 and 17 (c is not read).
+        assertThat(Kernels.countNaNRows(a, b, 0, 40)).isEqualTo(2);
+        assertThat(Kernels.countNaNRows(a, b, 4, 36)).isEqualTo(1);
+        assertThat(Kernels.countNaNRows(c, c, 0, 40)).isEqualTo(1);
+        assertThat(Kernels.countNaNRows(new double[8], new double[8], 0, 8)).isZero();
     }
 
     @Test

@@ -71,7 +71,7 @@ final class RosetteKernels {
             } else {
                 general(Result.STRAINS, r, shift, c, d, h, 0, 0, e1, e2, null, start, end);
             }
-            nan += Kernels.countNaNRows(e1, e2, e1, start, end - start);
+            nan += Kernels.countNaNRows(e1, e2, start, end - start);
         }
         return nan;
     }
@@ -148,7 +148,7 @@ final class RosetteKernels {
                 general(result, r, shift, c, d, h, k, nu, o1, o2, null, start, end);
             }
             nan += o2 == null ? Kernels.countNaN(o1, start, end - start)
-                    : Kernels.countNaNRows(o1, o2, o1, start, end - start);
+                    : Kernels.countNaNRows(o1, o2, start, end - start);
         }
         return nan;
     }
