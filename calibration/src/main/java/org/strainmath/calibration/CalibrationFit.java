@@ -248,10 +248,6 @@ public final class CalibrationFit {
         return weights == null ? filled(loads.length, 1.0) : weights.clone();
     }
 
-    boolean isWeighted() {
-        return weights != null;
-    }
-
     int degree() {
         return degree;
     }

@@ -350,7 +350,7 @@ public final class FitResult {
         double span = high - low;
         double from = extrapolate ? low - span : low;
         double to = extrapolate ? high + span : high;
-        if (scaled.length - first() == 1 || fit.degree() == 1) {
+        if (fit.degree() == 1) {
             double u = fit.hasIntercept() ? (reading - scaled[0]) / scaled[1] : reading / scaled[0];
             double load = centre + scale * u;
             checkInside(load, from, to, reading, extrapolate);

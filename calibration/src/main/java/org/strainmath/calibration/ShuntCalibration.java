@@ -147,7 +147,8 @@ public final class ShuntCalibration {
     private static double equivalent(Bridge bridge, int arm, double shuntOhms,
             ShuntPosition position) {
         double strain = bridge.toStrain(shuntedReading(bridge, arm, shuntOhms, position));
-        return Double.isNaN(strain) ? Double.POSITIVE_INFINITY * Math.signum(shuntOhms) : strain;
+        // No physical strain: a shunt that small is "too much", which is what bisection needs.
+        return Double.isNaN(strain) ? Double.POSITIVE_INFINITY : strain;
     }
 
     /**

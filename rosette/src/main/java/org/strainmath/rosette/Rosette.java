@@ -541,22 +541,6 @@ public final class Rosette {
                 material.stressInPlaneStress(new PlaneStrain(c + d, c - d, 2 * h)), e1, e2, angle);
     }
 
-    double[] rowC() {
-        return rowC;
-    }
-
-    double[] rowD() {
-        return rowD;
-    }
-
-    double[] rowH() {
-        return rowH;
-    }
-
-    boolean isFitted() {
-        return rowC.length > 3;
-    }
-
     // ---------------------------------------------------------------- kernels
 
     /**
