@@ -910,18 +910,14 @@ public final class Bridge {
      * {@link #toStrain(double[], int, double[], int, int)}, bit for bit. Never throws.
      */
     public double toStrain(double ratio) {
-        return toStrainWithin(ratio, ratioLow, ratioHigh);
-    }
-
-    /** The inverse with the physical reading interval narrowed to (low, high), for channels. */
-    double toStrainWithin(double ratio, double low, double high) {
         switch (form) {
             case LINEAR:
-                return inverseLinear(ratio, n0, n1, low, high);
+                return inverseLinear(ratio, n0, n1, ratioLow, ratioHigh);
             case FIRST_DEGREE:
-                return inverseFirstDegree(ratio, n0, n1, d1, low, high);
+                return inverseFirstDegree(ratio, n0, n1, d1, ratioLow, ratioHigh);
             default:
-                return inverseQuadratic(ratio, n0, n1, n2, d1, d2, rootSign, low, high);
+                return inverseQuadratic(ratio, n0, n1, n2, d1, d2, rootSign, ratioLow,
+                        ratioHigh);
         }
     }
 
@@ -959,51 +955,155 @@ public final class Bridge {
     }
 
     /**
-     * Converts from[start, end) into dst[start, end) with the reading interval (low, high),
-     * each strain multiplied by {@code factor}: the loop of
-     * {@link #toStrain(double[], int, double[], int, int)} (factor 1, which changes no bit),
-     * for channels.
+     * Converts from[start, end) into dst[start, end) with the reading interval (low, high): the
+     * loop of {@link #toStrain(double[], int, double[], int, int)}.
      */
-    void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
-            double high, double factor) {
+    private void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
+            double high) {
         switch (form) {
             case LINEAR:
-                inverseLinearBlock(from, dst, start, end, low, high, factor);
+                inverseLinearBlock(from, dst, start, end, low, high);
                 break;
             case FIRST_DEGREE:
-                inverseFirstDegreeBlock(from, dst, start, end, low, high, factor);
+                inverseFirstDegreeBlock(from, dst, start, end, low, high);
                 break;
             default:
-                inverseQuadraticBlock(from, dst, start, end, low, high, factor);
+                inverseQuadraticBlock(from, dst, start, end, low, high);
                 break;
         }
     }
 
-    void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
-            double high) {
-        toStrainWithin(from, dst, start, end, low, high, 1.0);
+    // ---------------------------------------------------------------- channel inverses
+    //
+    // A channel evaluates the inverse without the arithmetic mask, as the plain quotient
+    //   ε = (r − n0)/n1,  (r − n0)/(n1 − r·d1)  or  2·(r − n0)/(b + s·√Δ),
+    // times the channel's factor, and multiplies it by mask/mask, which is exactly 1 inside the
+    // reading interval and NaN outside (0/0). Where a chunk of codes is proven to lie inside an
+    // interval on which the quotient is regular (regularOn), the factor 1 is left out: the
+    // plain loop then costs one division per sample, and its bits are the same.
+
+    /** The strain of a channel's reading r: the plain quotient × factor, NaN outside (low, high). */
+    double channelStrain(double r, double low, double high, double factor) {
+        return plain(r) * factor * unity(r, low, high);
+    }
+
+    private double plain(double r) {
+        switch (form) {
+            case LINEAR:
+                return plainLinear(r, n0, n1);
+            case FIRST_DEGREE:
+                return plainFirstDegree(r, n0, n1, d1);
+            default:
+                return plainQuadratic(r, n0, n1, n2, d1, d2, rootSign);
+        }
     }
 
     /**
-     * Converts converter codes {@code codes[start + shift, end + shift)} into strains in
-     * dst[start, end) in one loop: {@code toStrainWithin(code·scale + offset, low, high)·factor}
-     * per sample, bit for bit the scalar function of a channel. An {@code int[]} cannot alias
-     * the output, so the two indices do not stop C2 from vectorising the loop.
+     * Whether the plain quotient is finite, and free of NaN, for every reading in [lo, hi], with
+     * a wide margin over rounding: its denominator keeps one sign and stays away from zero
+     * relative to the size of its terms, and, for the quadratic form, the discriminant stays
+     * positive by the same margin. Each of these is affine or quadratic in r, so its ends (and
+     * the vertex of the discriminant) bound it on the whole interval.
      */
-    void codesToStrainWithin(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double low, double high, double factor) {
+    boolean regularOn(double lo, double hi) {
+        if (!(lo <= hi) || !Double.isFinite(lo) || !Double.isFinite(hi)) {
+            return false;
+        }
+        final double margin = 1e-9;
         switch (form) {
             case LINEAR:
-                codesLinearBlock(codes, shift, scale, offset, dst, start, end, low, high,
-                        factor);
+                return true;
+            case FIRST_DEGREE:
+                return awayFromZero(n1, d1, lo, hi, margin);
+            default:
+                return awayFromZero(n1 * rootSign, d1 * rootSign, lo, hi, margin)
+                        && discriminantPositive(lo, hi, margin);
+        }
+    }
+
+    /** Whether c − r·k is positive at both ends, by margin × (|c| + |r·k|). */
+    private static boolean awayFromZero(double c, double k, double lo, double hi,
+            double margin) {
+        return c - lo * k > margin * (Math.abs(c) + Math.abs(lo * k))
+                && c - hi * k > margin * (Math.abs(c) + Math.abs(hi * k));
+    }
+
+    /**
+     * Whether Δ(r) = b² + 4·a·(r − n0), a quadratic in r, exceeds margin × the size of its
+     * terms on [lo, hi]: checked at both ends and at its vertex when that lies inside.
+     */
+    private boolean discriminantPositive(double lo, double hi, double margin) {
+        double size = Math.max(discriminantTerms(lo), discriminantTerms(hi));
+        double curvature = d1 * d1 - 4 * d2;
+        double lowest = Math.min(discriminant(lo), discriminant(hi));
+        if (curvature > 0) {
+            double vertex = (2 * n1 * d1 - 4 * n2 - 4 * d2 * n0) / (2 * curvature);
+            if (vertex > lo && vertex < hi) {
+                lowest = Math.min(lowest, discriminant(vertex));
+            }
+        }
+        return lowest > margin * size;
+    }
+
+    private double discriminant(double r) {
+        double b = n1 - r * d1;
+        double a = n2 - r * d2;
+        return b * b + 4.0 * a * (r - n0);
+    }
+
+    private double discriminantTerms(double r) {
+        double b = Math.abs(n1) + Math.abs(r * d1);
+        return b * b + 4.0 * (Math.abs(n2) + Math.abs(r * d2)) * (Math.abs(r) + Math.abs(n0));
+    }
+
+    /**
+     * Converts codes[start + shift, end + shift) into strains in dst[start, end) in one loop,
+     * plain(code·scale + offset)·factor per sample: for chunks whose codes regularOn has proven
+     * inside the reading interval. An {@code int[]} cannot alias the output, so the two
+     * indices do not stop C2 from vectorising the loop.
+     */
+    void codesToStrainPlain(int[] codes, int shift, double scale, double offset, double[] dst,
+            int start, int end, double factor) {
+        switch (form) {
+            case LINEAR:
+                codesLinearPlain(codes, shift, scale, offset, dst, start, end, factor);
                 break;
             case FIRST_DEGREE:
-                codesFirstDegreeBlock(codes, shift, scale, offset, dst, start, end, low, high,
-                        factor);
+                codesFirstDegreePlain(codes, shift, scale, offset, dst, start, end, factor);
                 break;
             default:
-                codesQuadraticBlock(codes, shift, scale, offset, dst, start, end, low, high,
-                        factor);
+                codesQuadraticPlain(codes, shift, scale, offset, dst, start, end, factor);
+                break;
+        }
+    }
+
+    /**
+     * Converts the readings dst[start, end) into strains in place: plain(r)·factor, times
+     * unity(r) unless {@code proven} (the readings are known to lie inside the interval).
+     */
+    void readingsToStrain(double[] dst, int start, int end, double low, double high,
+            double factor, boolean proven) {
+        switch (form) {
+            case LINEAR:
+                if (proven) {
+                    linearPlain(dst, start, end, factor);
+                } else {
+                    linearChecked(dst, start, end, low, high, factor);
+                }
+                break;
+            case FIRST_DEGREE:
+                if (proven) {
+                    firstDegreePlain(dst, start, end, factor);
+                } else {
+                    firstDegreeChecked(dst, start, end, low, high, factor);
+                }
+                break;
+            default:
+                if (proven) {
+                    quadraticPlain(dst, start, end, factor);
+                } else {
+                    quadraticChecked(dst, start, end, low, high, factor);
+                }
                 break;
         }
     }
@@ -1014,26 +1114,26 @@ public final class Bridge {
     // own.
 
     private void inverseLinearBlock(double[] from, double[] dst, int start, int end,
-            double low, double high, double factor) {
+            double low, double high) {
         final double c0 = n0;
         final double c1 = n1;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseLinear(from[i], c0, c1, low, high) * factor;
+            dst[i] = inverseLinear(from[i], c0, c1, low, high);
         }
     }
 
     private void inverseFirstDegreeBlock(double[] from, double[] dst, int start, int end,
-            double low, double high, double factor) {
+            double low, double high) {
         final double c0 = n0;
         final double c1 = n1;
         final double e1 = d1;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high) * factor;
+            dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high);
         }
     }
 
     private void inverseQuadraticBlock(double[] from, double[] dst, int start, int end,
-            double low, double high, double factor) {
+            double low, double high) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
@@ -1041,33 +1141,82 @@ public final class Bridge {
         final double e2 = d2;
         final double sign = rootSign;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high) * factor;
+            dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
         }
     }
 
-    private void codesLinearBlock(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double low, double high, double factor) {
+    private void codesLinearPlain(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor) {
         final double c0 = n0;
         final double c1 = n1;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseLinear(codes[i + shift] * scale + offset, c0, c1, low, high)
+            dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor;
+        }
+    }
+
+    private void codesFirstDegreePlain(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        for (int i = start; i < end; i++) {
+            dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor;
+        }
+    }
+
+    private void codesQuadraticPlain(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        for (int i = start; i < end; i++) {
+            dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
                     * factor;
         }
     }
 
-    private void codesFirstDegreeBlock(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double low, double high, double factor) {
+    private void linearPlain(double[] dst, int start, int end, double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        for (int i = start; i < end; i++) {
+            dst[i] = plainLinear(dst[i], c0, c1) * factor;
+        }
+    }
+
+    private void linearChecked(double[] dst, int start, int end, double low, double high,
+            double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        for (int i = start; i < end; i++) {
+            double r = dst[i];
+            dst[i] = plainLinear(r, c0, c1) * factor * unity(r, low, high);
+        }
+    }
+
+    private void firstDegreePlain(double[] dst, int start, int end, double factor) {
         final double c0 = n0;
         final double c1 = n1;
         final double e1 = d1;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1, low,
-                    high) * factor;
+            dst[i] = plainFirstDegree(dst[i], c0, c1, e1) * factor;
         }
     }
 
-    private void codesQuadraticBlock(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double low, double high, double factor) {
+    private void firstDegreeChecked(double[] dst, int start, int end, double low, double high,
+            double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        for (int i = start; i < end; i++) {
+            double r = dst[i];
+            dst[i] = plainFirstDegree(r, c0, c1, e1) * factor * unity(r, low, high);
+        }
+    }
+
+    private void quadraticPlain(double[] dst, int start, int end, double factor) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
@@ -1075,8 +1224,21 @@ public final class Bridge {
         final double e2 = d2;
         final double sign = rootSign;
         for (int i = start; i < end; i++) {
-            dst[i] = inverseQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2,
-                    sign, low, high) * factor;
+            dst[i] = plainQuadratic(dst[i], c0, c1, c2, e1, e2, sign) * factor;
+        }
+    }
+
+    private void quadraticChecked(double[] dst, int start, int end, double low, double high,
+            double factor) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        for (int i = start; i < end; i++) {
+            double r = dst[i];
+            dst[i] = plainQuadratic(r, c0, c1, c2, e1, e2, sign) * factor * unity(r, low, high);
         }
     }
 
@@ -1154,6 +1316,29 @@ public final class Bridge {
         double a = n2 - r * d2;
         double root = Math.sqrt(b * b + 4.0 * a * minusC);
         return (2.0 * minusC * g) / ((b + sign * root) * g);
+    }
+
+    /** 1 exactly for a reading inside (low, high), NaN outside: g/g with g the mask. */
+    private static double unity(double r, double low, double high) {
+        double g = mask(r, low, high);
+        return g / g;
+    }
+
+    private static double plainLinear(double r, double n0, double n1) {
+        return (r - n0) / n1;
+    }
+
+    private static double plainFirstDegree(double r, double n0, double n1, double d1) {
+        return (r - n0) / (n1 - r * d1);
+    }
+
+    private static double plainQuadratic(double r, double n0, double n1, double n2, double d1,
+            double d2, double sign) {
+        double minusC = r - n0;
+        double b = n1 - r * d1;
+        double a = n2 - r * d2;
+        double root = Math.sqrt(b * b + 4.0 * a * minusC);
+        return 2.0 * minusC / (b + sign * root);
     }
 
     // ---------------------------------------------------------------- text

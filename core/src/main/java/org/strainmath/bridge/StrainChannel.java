@@ -38,14 +38,10 @@ import org.strainmath.quantity.VoltageRatio;
 public final class StrainChannel {
 
     /**
-     * Whether the {@code int[]} kernels convert codes and invert the bridge in one loop. The C2
-     * compiler of JDK 25 vectorises that loop; the one of JDK 17 vectorises no loop that
-     * converts {@code int} to {@code double} beside a division, so there the codes are
-     * converted in a loop of their own first, which makes the channel several times faster
-     * (measured with {@code ChannelBenchmark}; the JDKs in between are not measured and take
-     * the JDK 17 path). Both paths compute the same bits.
+     * Readings within this share of the reading interval's width from either end are never
+     * proven regular, so that the proof keeps a margin from the ends.
      */
-    static final boolean ONE_LOOP = Runtime.version().feature() >= 25;
+    private static final double EDGE = 0x1p-16;
 
     private final Bridge bridge;
     private final AdcInput input;
@@ -65,6 +61,13 @@ public final class StrainChannel {
     private final double offset;
     private final double low;
     private final double high;
+    /**
+     * The codes [provenLow, provenHigh] whose readings lie inside (low, high) on an interval
+     * where the bridge's plain quotient is proven regular (Bridge.regularOn): a chunk of codes
+     * within them needs neither the per-sample check nor a count of NaN. Empty (1, 0) if none.
+     */
+    private final int provenLow;
+    private final int provenHigh;
 
     private StrainChannel(Bridge bridge, AdcInput input, double transverseRatio,
             ThermalOutput thermalOutput, Temperature zeroTemperature, double spanFactor) {
@@ -79,6 +82,9 @@ public final class StrainChannel {
         // Readings inside the converter's range (rails excluded) and physical for the bridge.
         this.low = Math.max(bridge.ratioLow(), input.lowCode() * scale + offset);
         this.high = Math.min(bridge.ratioHigh(), input.highCode() * scale + offset);
+        long[] proven = provenCodes(bridge, scale, offset, low, high);
+        this.provenLow = (int) proven[0];
+        this.provenHigh = (int) proven[1];
         StrainGauge gauge = firstActiveGauge(bridge);
         this.transverseFactor = Double.isNaN(transverseRatio) ? 1.0
                 : (1 - gauge.calibrationPoissonRatio() * gauge.transverseSensitivity())
@@ -97,6 +103,42 @@ public final class StrainChannel {
             }
         }
         throw new AssertionError("a bridge has an active arm");
+    }
+
+    /**
+     * The codes, as {low, high} within the int range, whose readings code·scale + offset lie in
+     * the reading interval less a margin of EDGE × its width at each end, if the bridge's plain
+     * quotient is regular there; {1, 0} otherwise. Rounding is monotonic, so every code between
+     * the two found ends gives a reading between their readings.
+     */
+    private static long[] provenCodes(Bridge bridge, double scale, double offset, double low,
+            double high) {
+        double margin = (high - low) * EDGE;
+        double lo = low + margin;
+        double hi = high - margin;
+        long[] none = {1, 0};
+        if (!(lo < hi) || !bridge.regularOn(lo, hi)) {
+            return none;
+        }
+        double first = scale > 0 ? lo : hi;
+        double last = scale > 0 ? hi : lo;
+        long a = clampToInt(Math.ceil((first - offset) / scale));
+        long b = clampToInt(Math.floor((last - offset) / scale));
+        while (a <= b && !within(a * scale + offset, lo, hi)) {
+            a++;
+        }
+        while (a <= b && !within(b * scale + offset, lo, hi)) {
+            b--;
+        }
+        return a <= b ? new long[] {a, b} : none;
+    }
+
+    private static boolean within(double r, double lo, double hi) {
+        return r >= lo && r <= hi;
+    }
+
+    private static long clampToInt(double code) {
+        return (long) Math.max(Integer.MIN_VALUE, Math.min(Integer.MAX_VALUE, code));
     }
 
     /**
@@ -295,7 +337,7 @@ public final class StrainChannel {
      * set, is not applied (use {@link #toStrain(long, double)}).
      */
     public double toStrain(long code) {
-        return bridge.toStrainWithin(code * scale + offset, low, high) * factor;
+        return bridge.channelStrain(code * scale + offset, low, high, factor);
     }
 
     /**
@@ -365,45 +407,78 @@ public final class StrainChannel {
         final double s = scale;
         final double o = offset;
         final int mask = input.isOffsetBinary() ? 0xFFFF : -1;
-        for (int i = 0; i < len; i++) {
-            dst[dstOff + i] = (codes[codesOff + i] & mask) * s + o;
+        int nan = 0;
+        for (int done = 0; done < len; done += Kernels.CHUNK) {
+            int start = dstOff + done;
+            int stop = start + Math.min(Kernels.CHUNK, len - done);
+            int min = Integer.MAX_VALUE;
+            int max = Integer.MIN_VALUE;
+            for (int i = start, k = codesOff + done; i < stop; i++, k++) {
+                int code = codes[k] & mask;
+                min = Math.min(min, code);
+                max = Math.max(max, code);
+                dst[i] = code * s + o;
+            }
+            nan += finish(dst, start, stop, null, 0, proven(min, max));
         }
-        return finish(dst, dstOff, len, null, 0);
+        return nan;
     }
 
     private int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff,
             double[] dst, int dstOff, int len) {
-        return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len, ONE_LOOP);
+        return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len, true);
     }
 
     /**
-     * The int[] kernel with the loop structure chosen by {@code oneLoop} (see
-     * {@link #ONE_LOOP}); both give the same bits. Package-private so that tests run both.
+     * The int[] kernel. Per chunk, the codes' least and greatest values decide the path: inside
+     * the proven codes, one vectorised loop with one division per sample and no count; else the
+     * readings, the checked inverse and a count of the NaN it gave. {@code mayProve} false takes
+     * the second path always (package-private so that tests compare both); both give the same
+     * bits. The proven path converts and inverts in one loop, which C2 vectorises on JDK 17
+     * and 25 alike (measured with {@code ChannelBenchmark}; on JDK 17 converting the codes in a
+     * loop of their own first was slower).
      */
     int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff, double[] dst,
-            int dstOff, int len, boolean oneLoop) {
+            int dstOff, int len, boolean mayProve) {
         Checks.block(Objects.requireNonNull(codes, "codes").length, codesOff, dst, dstOff, len);
-        if (!oneLoop) {
-            codesToRatio(codes, codesOff, dst, dstOff, len);
-            return finish(dst, dstOff, len, celsius, celsiusOff);
-        }
         final int shift = codesOff - dstOff;
         int nan = 0;
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            bridge.codesToStrainWithin(codes, shift, scale, offset, dst, start, stop, low, high,
-                    factor);
-            nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff);
+            if (mayProve && proven(codes, start + shift, stop + shift)) {
+                bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop, factor);
+                nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff, true);
+            } else {
+                codesToReadings(codes, shift, dst, start, stop);
+                nan += finish(dst, start, stop, celsius, celsiusOff - dstOff, false);
+            }
         }
         return nan;
     }
 
-    private void codesToRatio(int[] codes, int codesOff, double[] dst, int dstOff, int len) {
+    /** Whether every code of codes[from, to) lies within the proven codes. */
+    private boolean proven(int[] codes, int from, int to) {
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
+        for (int i = from; i < to; i++) {
+            int code = codes[i];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
+        }
+        return proven(min, max);
+    }
+
+    /** Whether codes from min to max all lie within the proven codes; package-private for tests. */
+    boolean proven(int min, int max) {
+        return min >= provenLow && max <= provenHigh;
+    }
+
+    private void codesToReadings(int[] codes, int shift, double[] dst, int start, int stop) {
         final double s = scale;
         final double o = offset;
-        for (int i = 0; i < len; i++) {
-            dst[dstOff + i] = codes[codesOff + i] * s + o;
+        for (int i = start; i < stop; i++) {
+            dst[i] = codes[i + shift] * s + o;
         }
     }
 
@@ -416,34 +491,49 @@ public final class StrainChannel {
             double[] celsiusPerFrame, int celsiusOff, double[] dst, int dstOff, int frameCount) {
         final double s = scale;
         final double o = offset;
-        for (int i = 0, k = framesOff + column; i < frameCount; i++, k += channelsPerFrame) {
-            dst[dstOff + i] = frames[k] * s + o;
-        }
-        return finish(dst, dstOff, frameCount, celsiusPerFrame, celsiusOff);
-    }
-
-    /** The bridge inverse, the transverse factor and the thermal correction, in place. */
-    private int finish(double[] dst, int dstOff, int len, double[] celsius, int celsiusOff) {
         int nan = 0;
-        for (int done = 0; done < len; done += Kernels.CHUNK) {
+        int k = framesOff + column;
+        for (int done = 0; done < frameCount; done += Kernels.CHUNK) {
             int start = dstOff + done;
-            int stop = start + Math.min(Kernels.CHUNK, len - done);
-            bridge.toStrainWithin(dst, dst, start, stop, low, high, factor);
-            nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff);
+            int stop = start + Math.min(Kernels.CHUNK, frameCount - done);
+            int min = Integer.MAX_VALUE;
+            int max = Integer.MIN_VALUE;
+            for (int i = start; i < stop; i++, k += channelsPerFrame) {
+                int code = frames[k];
+                min = Math.min(min, code);
+                max = Math.max(max, code);
+                dst[i] = code * s + o;
+            }
+            nan += finish(dst, start, stop, celsiusPerFrame, celsiusOff - dstOff,
+                    proven(min, max));
         }
         return nan;
     }
 
     /**
-     * The thermal correction of dst[start, end) in place, when the channel has one and
-     * temperatures are given (celsius[i + shift] for dst[i]); returns the count of NaN there.
+     * The bridge inverse with the channel's factor, and the thermal correction, of the
+     * readings dst[start, stop) in place; returns the count of NaN there.
      */
-    private int corrected(double[] dst, int start, int stop, double[] celsius, int shift) {
+    private int finish(double[] dst, int start, int stop, double[] celsius, int shift,
+            boolean proven) {
+        bridge.readingsToStrain(dst, start, stop, low, high, factor, proven);
+        return corrected(dst, start, stop, celsius, shift, proven);
+    }
+
+    /**
+     * The thermal correction of dst[start, end) in place, when the channel has one and
+     * temperatures are given (celsius[i + shift] for dst[i]); returns the count of NaN there,
+     * which is 0 without counting when the strains were proven regular and nothing followed.
+     */
+    private int corrected(double[] dst, int start, int stop, double[] celsius, int shift,
+            boolean proven) {
         if (thermal != null && celsius != null) {
             thermal.correctInPlace(dst, celsius, shift, start, stop);
             if (drift != 0.0) {
                 gaugeFactorInPlace(dst, celsius, shift, start, stop);
             }
+        } else if (proven) {
+            return 0;
         }
         return Kernels.countNaN(dst, start, stop - start);
     }

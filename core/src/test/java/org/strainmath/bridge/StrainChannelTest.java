@@ -102,20 +102,26 @@ class StrainChannelTest {
 
     @org.junit.jupiter.params.ParameterizedTest
     @org.junit.jupiter.params.provider.MethodSource("everyInverseForm")
-    void bothLoopStructuresGiveTheScalarBitForBit(Bridge bridge) {
-        // Oracle: the scalar toStrain(long) of the same channel. The int[] kernel either
-        // converts and inverts in one loop (JDK 25) or in two (JDK 17); both must match it.
+    void provenAndCheckedChunksGiveTheScalarBitForBit(Bridge bridge) {
+        // Oracle: the scalar toStrain(long) of the same channel. A chunk of codes proven inside
+        // the regular interval takes the plain loop without a count, any other chunk the checked
+        // loop and a count; both must match the scalar, and so must the path that never proves.
         StrainChannel channel = StrainChannel.of(bridge, ADC).withTransverseCorrection(-0.25);
         if (bridge == WIRED) {
             channel = channel.zeroedByOffsetAt(ZERO_CODE);
         }
         SplittableRandom random = new SplittableRandom(41);
-        int n = 2 * org.strainmath.internal.Kernels.CHUNK + 77;
+        int chunk = org.strainmath.internal.Kernels.CHUNK;
+        int n = 2 * chunk + 77;
         int[] codes = new int[n + 5];
         for (int i = 0; i < codes.length; i++) {
-            codes[i] = random.nextInt(-(1 << 23), 1 << 23);
+            // the first chunk within half the range (proven), the rest over all of it
+            int half = i < chunk + 5 ? 1 << 22 : 1 << 23;
+            codes[i] = random.nextInt(-half, half);
         }
-        codes[100] = (1 << 23) - 1;
+        codes[chunk + 100] = (1 << 23) - 1;
+        assertThat(channel.proven(-(1 << 22), 1 << 22)).isTrue();
+        assertThat(channel.proven(-(1 << 22), (1 << 23) - 1)).isFalse();
         double[] expected = new double[n];
         int expectedNaN = 0;
         for (int i = 0; i < n; i++) {
@@ -123,10 +129,10 @@ class StrainChannelTest {
             expectedNaN += Double.isNaN(expected[i]) ? 1 : 0;
         }
         assertThat(expectedNaN).isPositive();
-        for (boolean oneLoop : new boolean[] {true, false}) {
+        for (boolean mayProve : new boolean[] {true, false}) {
             double[] out = new double[n + 2];
-            int nan = channel.convert(codes, 5, null, 0, out, 2, n, oneLoop);
-            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("one loop: %s", oneLoop)
+            int nan = channel.convert(codes, 5, null, 0, out, 2, n, mayProve);
+            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("may prove: %s", mayProve)
                     .isEqualTo(expected);
             assertThat(nan).isEqualTo(expectedNaN);
         }
@@ -306,9 +312,9 @@ class StrainChannelTest {
 
     @org.junit.jupiter.params.ParameterizedTest
     @org.junit.jupiter.params.provider.ValueSource(booleans = {true, false})
-    void aSpanCorrectionScalesTheBridgeStrainBeforeTheThermalCorrection(boolean oneLoop) {
+    void aSpanCorrectionScalesTheBridgeStrainBeforeTheThermalCorrection(boolean mayProve) {
         // Definition (common practice, no source): the corrected strain is factor × the strain
-        // the channel gave, before thermal output is subtracted; both loop structures agree.
+        // the channel gave, before thermal output is subtracted; both kernel paths agree.
         ThermalOutput curve = ThermalOutput.ofCelsius(-30, 2.1, -0.045);
         StrainChannel plain = StrainChannel.of(WIRED, ADC).withTransverseCorrection(-0.3)
                 .zeroedByOffsetAt(ZERO_CODE);
@@ -330,7 +336,7 @@ class StrainChannelTest {
                 .isCloseTo(plain.toStrain(900_000) * 1.02 - thermal, within(1e-15));
         int[] codes = {-400_000, 50_000, 2_000_000, 900_000};
         double[] out = new double[4];
-        spanned.convert(codes, 0, null, 0, out, 0, 4, oneLoop);
+        spanned.convert(codes, 0, null, 0, out, 0, 4, mayProve);
         for (int i = 0; i < 4; i++) {
             assertThat(out[i]).isEqualTo(spanned.toStrain(codes[i]));
         }
