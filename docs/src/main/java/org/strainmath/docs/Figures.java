@@ -32,7 +32,9 @@ import org.strainmath.uncertainty.UncertaintyResult;
  * Draws the guide's figures from the library itself (never by hand), as SVG, with XChart:
  * the nonlinearity of each bridge arrangement, Mohr's circle of the rosette example, the
  * residuals of NIST's Pontius data against a straight line and the quadratic, and the
- * uncertainty budget of the channel example as bars.
+ * uncertainty budget of the channel example as bars, and the kernels' throughput against block
+ * size from the JMH results committed beside the figures ({@code throughput-jdk*.csv}, which
+ * {@code docs/performance.md} says how to measure again).
  *
  * <pre>
  *   mvn -B -q -Pfigures -DskipTests -pl docs -am verify      (writes docs/figures/*.svg)
@@ -65,6 +67,8 @@ public final class Figures {
         written.add(save(pontius(top.resolve(
                 "calibration/src/test/resources/nist-strd-pontius.txt")), out.resolve("pontius-residuals")));
         written.add(save(budget(), out.resolve("channel-budget")));
+        written.add(save(throughput(top.resolve("docs/figures/throughput-jdk17.csv"),
+                top.resolve("docs/figures/throughput-jdk25.csv")), out.resolve("throughput")));
         return written;
     }
 
@@ -175,6 +179,38 @@ public final class Figures {
                 .xAxisTitle("input").yAxisTitle("contribution |c·u| (µε)").build();
         chart.getStyler().setLegendVisible(false);
         chart.addSeries("contribution", names, values);
+        return chart;
+    }
+
+    /**
+     * Samples per second against block size, one series per kernel and JDK, from JMH's CSV
+     * results ({@code -rf csv}): score (blocks/s) × the {@code size} parameter.
+     */
+    static XYChart throughput(Path jdk17, Path jdk25) throws IOException {
+        XYChart chart = new XYChartBuilder().width(760).height(460)
+                .title("Throughput against block size (one core)")
+                .xAxisTitle("block size (samples)").yAxisTitle("million samples per second").build();
+        chart.getStyler().setXAxisLogarithmic(true);
+        chart.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.OutsideS);
+        for (Path csv : new Path[] {jdk17, jdk25}) {
+            String jdk = csv.getFileName().toString().contains("17") ? "JDK 17" : "JDK 25";
+            java.util.Map<String, List<double[]>> series = new java.util.TreeMap<>();
+            List<String> lines = Files.readAllLines(csv);
+            for (String line : lines.subList(1, lines.size())) {
+                String[] f = line.replace("\"", "").split(",");
+                String name = f[0].substring(f[0].lastIndexOf('.', f[0].lastIndexOf('.') - 1) + 1);
+                double size = Double.parseDouble(f[f.length - 1]);
+                series.computeIfAbsent(name, k -> new ArrayList<>())
+                        .add(new double[] {size, Double.parseDouble(f[4]) * size / 1e6});
+            }
+            for (java.util.Map.Entry<String, List<double[]>> e : series.entrySet()) {
+                List<double[]> points = e.getValue();
+                points.sort(java.util.Comparator.comparingDouble(v -> v[0]));
+                double[] x = points.stream().mapToDouble(v -> v[0]).toArray();
+                double[] y = points.stream().mapToDouble(v -> v[1]).toArray();
+                chart.addSeries(e.getKey() + ", " + jdk, x, y);
+            }
+        }
         return chart;
     }
 }

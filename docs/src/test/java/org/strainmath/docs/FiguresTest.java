@@ -17,13 +17,15 @@ class FiguresTest {
         System.setProperty("java.awt.headless", "true");
         List<Path> written = Figures.drawAll(out, Path.of("").toAbsolutePath().getParent());
         assertThat(written).extracting(p -> p.getFileName().toString()).containsExactly(
-                "nonlinearity.svg", "mohr-circle.svg", "pontius-residuals.svg", "channel-budget.svg");
+                "nonlinearity.svg", "mohr-circle.svg", "pontius-residuals.svg", "channel-budget.svg",
+                "throughput.svg");
         for (Path svg : written) {
             String text = Files.readString(svg);
             assertThat(text).as("%s", svg).contains("<svg").hasSizeGreaterThan(10_000);
         }
         // Every figure the guide shows is one the generator writes.
-        for (String name : new String[] {"nonlinearity", "mohr-circle", "pontius-residuals", "channel-budget"}) {
+        for (String name : new String[] {"nonlinearity", "mohr-circle", "pontius-residuals", "channel-budget",
+            "throughput"}) {
             assertThat(Path.of("figures", name + ".svg")).as("committed figure %s", name).exists();
         }
     }
@@ -34,5 +36,22 @@ class FiguresTest {
         // practice, no source): −0.1 % per 1000 µε at K = 2, so −2 % at 20 000 µε.
         double[] y = Figures.nonlinearity().getSeriesMap().get("quarter").getYData();
         assertThat(y[y.length - 1]).isBetween(-2.1, -1.9);
+    }
+
+    @Test
+    void theThroughputFigureHasEveryKernelAtEveryMeasuredSize() throws Exception {
+        // From the committed JMH results: four benchmarks, one series each per JDK, each with the
+        // block sizes of the sweep (docs/performance.md), samples/s = blocks/s × size.
+        Path top = Path.of("").toAbsolutePath().getParent();
+        var chart = Figures.throughput(top.resolve("docs/figures/throughput-jdk17.csv"),
+                top.resolve("docs/figures/throughput-jdk25.csv"));
+        assertThat(chart.getSeriesMap()).hasSize(8);
+        for (var series : chart.getSeriesMap().values()) {
+            assertThat(series.getXData()).as(series.getName()).hasSizeGreaterThanOrEqualTo(6);
+            for (double y : series.getYData()) {
+                assertThat(y).as(series.getName()).isPositive();
+            }
+        }
+        assertThat(chart.getSeriesMap()).containsKey("ChannelBenchmark.channelBlock, JDK 25");
     }
 }
