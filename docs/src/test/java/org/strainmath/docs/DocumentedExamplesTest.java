@@ -65,8 +65,11 @@ class DocumentedExamplesTest {
                 shell.addToClasspath(entry);
             }
             System.setOut(capture);
-            if (page.getFileName().toString().equals("jshell.md")) {
-                // The page documents the startup script: run it first, as jshell --startup does.
+            String name = page.getFileName().toString();
+            if (name.equals("jshell.md") || name.equals("getting-started.md")
+                    || name.equals("conventions.md")) {
+                // The pages type at the prompt the startup script prepares: run it first, as
+                // jshell --startup does.
                 run(shell, new MarkdownExamples.Block(STARTUP, 1, "java", Files.readString(STARTUP), null));
             }
             for (MarkdownExamples.Block block : java) {
