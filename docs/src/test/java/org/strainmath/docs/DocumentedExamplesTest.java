@@ -67,7 +67,7 @@ class DocumentedExamplesTest {
             System.setOut(capture);
             String name = page.getFileName().toString();
             if (name.equals("jshell.md") || name.equals("getting-started.md")
-                    || name.equals("conventions.md")) {
+                    || name.equals("conventions.md") || name.equals("real-time.md")) {
                 // The pages type at the prompt the startup script prepares: run it first, as
                 // jshell --startup does.
                 run(shell, new MarkdownExamples.Block(STARTUP, 1, "java", Files.readString(STARTUP), null));
