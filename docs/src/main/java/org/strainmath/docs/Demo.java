@@ -1,9 +1,18 @@
 package org.strainmath.docs;
 
+import java.io.IOException;
 import java.io.PrintStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.Locale;
 import java.util.SplittableRandom;
 
+import org.knowm.xchart.VectorGraphicsEncoder;
+import org.knowm.xchart.VectorGraphicsEncoder.VectorGraphicsFormat;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.strainmath.bridge.AdcInput;
 import org.strainmath.bridge.Bridge;
 import org.strainmath.bridge.StrainChannel;
@@ -38,7 +47,8 @@ import org.strainmath.uncertainty.UncertaintyResult;
  * <p>All numbers here are made up for the demo; they come from no real structure. The rosette
  * codes, the temperatures and the rig readings are generated from a known truth (also made up)
  * through the library's forward models plus seeded noise, so the report can show how close the
- * reduction comes.
+ * reduction comes. The report ends with two figures of its own, drawn with XChart into
+ * {@code target/demo-figures} of the working folder.
  */
 public final class Demo {
 
@@ -112,11 +122,15 @@ public final class Demo {
         out.println("rod output at " + peak + " and 5 V: "
                 + rod.outputVoltage(peak, Voltage.ofVolts(5)));
         out.println();
-        rosette(out, steel);
+        XYChart mohr = rosette(out, steel);
         out.println();
-        link(out);
+        XYChart residuals = link(out);
         out.println();
-        out.println("Figures of the guide, drawn by the library: mvn -B -q -Pfigures -DskipTests -pl docs -am verify");
+        Path figures = Path.of("target", "demo-figures");
+        save(mohr, figures.resolve("gusset-mohr-circle"));
+        save(residuals, figures.resolve("link-residuals"));
+        out.println("figures: gusset-mohr-circle.svg, link-residuals.svg in " + figures
+                + " (the working folder's)");
         out.println();
         out.println("Results are only as good as the installation, the gauge data and the"
                 + " calibration;");
@@ -128,7 +142,7 @@ public final class Demo {
      * 15 °C), 256 samples per grid with 300 codes (about 0.5 µε) RMS of noise, reduced to
      * principal stresses and von Mises, with its ratio to a demo allowable.
      */
-    private static void rosette(PrintStream out, IsotropicMaterial steel) {
+    private static XYChart rosette(PrintStream out, IsotropicMaterial steel) {
         PlaneStress truth = new PlaneStress(92e6, -21e6, 38e6);          // invented, Pa
         PlaneStrain truthStrain = steel.strainInPlaneStress(truth);
         Bridge grid = Bridge.quarter(StrainGauge.ofOhms(350, 2.08))
@@ -176,6 +190,25 @@ public final class Demo {
         out.println("  ratio to the demo allowable " + allowable + ": "
                 + String.format(Locale.ROOT, "%.2f", measured.vonMisesRatio(allowable))
                 + " (a ratio, not a verdict)");
+        double c = measured.mohrCircle().centre().toMegapascals();
+        double r = measured.mohrCircle().radius().toMegapascals();
+        XYChart chart = new XYChartBuilder().width(560).height(560)
+                .title("Gusset rosette: Mohr's circle of stress (demo)")
+                .xAxisTitle("normal stress (MPa)").yAxisTitle("shear stress (MPa)").build();
+        chart.getStyler().setXAxisMin(c - 1.1 * r).setXAxisMax(c + 1.1 * r)
+                .setYAxisMin(-1.1 * r).setYAxisMax(1.1 * r);
+        double[] x = new double[181];
+        double[] y = new double[181];
+        for (int i = 0; i < x.length; i++) {
+            double t = 2 * Math.PI * i / (x.length - 1);
+            x[i] = c + r * Math.cos(t);
+            y[i] = r * Math.sin(t);
+        }
+        chart.addSeries("measured", x, y).setMarker(SeriesMarkers.NONE);
+        chart.addSeries("truth of the demo, x and y faces",
+                new double[] {truth.sxx() / 1e6, truth.syy() / 1e6},
+                new double[] {truth.txy() / 1e6, -truth.txy() / 1e6}).setMarker(SeriesMarkers.CIRCLE);
+        return chart;
     }
 
     /**
@@ -183,7 +216,7 @@ public final class Demo {
      * curve plus noise), then read 20 times at the proof load; the load with its expanded
      * uncertainty (GUM, 95 %).
      */
-    private static void link(PrintStream out) {
+    private static XYChart link(PrintStream out) {
         SplittableRandom noise = new SplittableRandom(74);
         double[] loads = {0, 10, 20, 30, 40, 50};                           // kN
         double[] readings = new double[loads.length];                       // mV/V
@@ -204,6 +237,21 @@ public final class Demo {
                 "  force at the proof load: %s kN ± %s kN (k = %.2f, 95 %%; truth of the demo: 40 kN)",
                 load.estimateRounded(), load.expandedUncertaintyRounded(),
                 load.coverageFactor()));
+        XYChart chart = new XYChartBuilder().width(640).height(400)
+                .title("Tension link: residuals of the rig calibration (demo)")
+                .xAxisTitle("load (kN)").yAxisTitle("residual (mV/V)").build();
+        chart.addSeries("quadratic fit", loads, fit.residuals()).setMarker(SeriesMarkers.CIRCLE);
+        return chart;
+    }
+
+    private static void save(XYChart chart, Path base) {
+        System.setProperty("java.awt.headless", "true");
+        try {
+            Files.createDirectories(base.getParent());
+            VectorGraphicsEncoder.saveVectorGraphic(chart, base.toString(), VectorGraphicsFormat.SVG);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
     }
 
     /** The link's invented true curve: mV/V at a load in kN. */
