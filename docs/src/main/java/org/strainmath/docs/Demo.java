@@ -8,8 +8,6 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.SplittableRandom;
 
-import org.knowm.xchart.VectorGraphicsEncoder;
-import org.knowm.xchart.VectorGraphicsEncoder.VectorGraphicsFormat;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.style.markers.SeriesMarkers;
@@ -197,14 +195,8 @@ public final class Demo {
                 .xAxisTitle("normal stress (MPa)").yAxisTitle("shear stress (MPa)").build();
         chart.getStyler().setXAxisMin(c - 1.1 * r).setXAxisMax(c + 1.1 * r)
                 .setYAxisMin(-1.1 * r).setYAxisMax(1.1 * r);
-        double[] x = new double[181];
-        double[] y = new double[181];
-        for (int i = 0; i < x.length; i++) {
-            double t = 2 * Math.PI * i / (x.length - 1);
-            x[i] = c + r * Math.cos(t);
-            y[i] = r * Math.sin(t);
-        }
-        chart.addSeries("measured", x, y).setMarker(SeriesMarkers.NONE);
+        double[][] circle = Figures.circle(c, r);
+        chart.addSeries("measured", circle[0], circle[1]).setMarker(SeriesMarkers.NONE);
         chart.addSeries("truth of the demo, x and y faces",
                 new double[] {truth.sxx() / 1e6, truth.syy() / 1e6},
                 new double[] {truth.txy() / 1e6, -truth.txy() / 1e6}).setMarker(SeriesMarkers.CIRCLE);
@@ -248,7 +240,7 @@ public final class Demo {
         System.setProperty("java.awt.headless", "true");
         try {
             Files.createDirectories(base.getParent());
-            VectorGraphicsEncoder.saveVectorGraphic(chart, base.toString(), VectorGraphicsFormat.SVG);
+            Figures.save(chart, base);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

@@ -72,7 +72,8 @@ public final class Figures {
         return written;
     }
 
-    private static Path save(org.knowm.xchart.internal.chartpart.Chart<?, ?> chart, Path base)
+    /** Writes {@code chart} as {@code base.svg} and returns that file. */
+    static Path save(org.knowm.xchart.internal.chartpart.Chart<?, ?> chart, Path base)
             throws IOException {
         VectorGraphicsEncoder.saveVectorGraphic(chart, base.toString(), VectorGraphicsFormat.SVG);
         return Path.of(base + ".svg");
@@ -108,14 +109,9 @@ public final class Figures {
         PlaneStrain e = r.strain();
         double c = r.mohrCircle().centre().toMicrostrain();
         double radius = r.mohrCircle().radius().toMicrostrain();
-        int n = 181;
-        double[] x = new double[n];
-        double[] y = new double[n];
-        for (int i = 0; i < n; i++) {
-            double t = 2 * Math.PI * i / (n - 1);
-            x[i] = c + radius * Math.cos(t);
-            y[i] = radius * Math.sin(t);
-        }
+        double[][] circle = circle(c, radius);
+        double[] x = circle[0];
+        double[] y = circle[1];
         XYChart chart = new XYChartBuilder().width(560).height(560)
                 .title("Mohr's circle of the rosette example (640, 515, -180 µε)")
                 .xAxisTitle("normal strain (µε)").yAxisTitle("half the shear strain (µε)").build();
@@ -212,5 +208,17 @@ public final class Figures {
             }
         }
         return chart;
+    }
+
+    /** 181 points {x, y} around a Mohr circle of centre {@code c} and radius {@code r}. */
+    static double[][] circle(double c, double r) {
+        double[] x = new double[181];
+        double[] y = new double[181];
+        for (int i = 0; i < x.length; i++) {
+            double t = 2 * Math.PI * i / (x.length - 1);
+            x[i] = c + r * Math.cos(t);
+            y[i] = r * Math.sin(t);
+        }
+        return new double[][] {x, y};
     }
 }
