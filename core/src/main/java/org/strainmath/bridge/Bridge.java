@@ -1078,6 +1078,28 @@ public final class Bridge {
     }
 
     /**
+     * As {@link #codesToStrainPlain}, less the thermal output of the temperature of each sample,
+     * t = celsius[i] (which may be dst itself: each t is read before dst[i] is written), in one
+     * loop: plain(code·scale + offset)·factor − q(t). Returns whether every t was finite; if
+     * so, the results equal {@code thermal.correct(plain·factor, t)} bit for bit.
+     */
+    boolean codesToStrainLessThermal(int[] codes, int shift, double scale, double offset,
+            double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        switch (form) {
+            case LINEAR:
+                return codesLinearLessThermal(codes, shift, scale, offset, celsius, dst, start,
+                        end, factor, thermal);
+            case FIRST_DEGREE:
+                return codesFirstDegreeLessThermal(codes, shift, scale, offset, celsius, dst,
+                        start, end, factor, thermal);
+            default:
+                return codesQuadraticLessThermal(codes, shift, scale, offset, celsius, dst, start,
+                        end, factor, thermal);
+        }
+    }
+
+    /**
      * Converts the readings dst[start, end) into strains in place: plain(r)·factor, times
      * unity(r) unless {@code proven} (the readings are known to lie inside the interval).
      */
@@ -1176,6 +1198,75 @@ public final class Bridge {
             dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
                     * factor;
         }
+    }
+
+    // The thermal output q(t) = p0 + t·(p1 + t·(p2 + t·(p3 + t·p4))) is written out in each of
+    // the three loops below rather than called: it is the same expression as
+    // ThermalOutput.Correction's, checked bit for bit by the channel tests.
+
+    private boolean codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
+            double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double p0 = thermal.coefficient(0);
+        final double p1 = thermal.coefficient(1);
+        final double p2 = thermal.coefficient(2);
+        final double p3 = thermal.coefficient(3);
+        final double p4 = thermal.coefficient(4);
+        int finite = 1;
+        for (int i = start; i < end; i++) {
+            double t = celsius[i];
+            finite &= Kernels.finiteBit(t);
+            dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor
+                    - (p0 + t * (p1 + t * (p2 + t * (p3 + t * p4))));
+        }
+        return finite == 1;
+    }
+
+    private boolean codesFirstDegreeLessThermal(int[] codes, int shift, double scale,
+            double offset, double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        final double p0 = thermal.coefficient(0);
+        final double p1 = thermal.coefficient(1);
+        final double p2 = thermal.coefficient(2);
+        final double p3 = thermal.coefficient(3);
+        final double p4 = thermal.coefficient(4);
+        int finite = 1;
+        for (int i = start; i < end; i++) {
+            double t = celsius[i];
+            finite &= Kernels.finiteBit(t);
+            dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor
+                    - (p0 + t * (p1 + t * (p2 + t * (p3 + t * p4))));
+        }
+        return finite == 1;
+    }
+
+    private boolean codesQuadraticLessThermal(int[] codes, int shift, double scale,
+            double offset, double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        final double p0 = thermal.coefficient(0);
+        final double p1 = thermal.coefficient(1);
+        final double p2 = thermal.coefficient(2);
+        final double p3 = thermal.coefficient(3);
+        final double p4 = thermal.coefficient(4);
+        int finite = 1;
+        for (int i = start; i < end; i++) {
+            double t = celsius[i];
+            finite &= Kernels.finiteBit(t);
+            dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
+                    * factor - (p0 + t * (p1 + t * (p2 + t * (p3 + t * p4))));
+        }
+        return finite == 1;
     }
 
     private void linearPlain(double[] dst, int start, int end, double factor) {

@@ -4,6 +4,8 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 
+import org.strainmath.internal.Checks;
+
 /**
  * A multi-channel input that delivers interleaved frames: frame i holds one code per channel,
  * {@code frames[i·N + c]} for column c of N. Each column has its own configured
@@ -77,9 +79,11 @@ public final class ChannelFrames {
      * Converts {@code frameCount} frames from {@code frames[framesOff...]} into
      * {@code dst[c][dstOff...]}, with one temperature per frame in °C from
      * {@code celsiusPerFrame[celsiusOff...]} for the channels that correct for thermal output
-     * ({@code null} if none does).
+     * ({@code null} if none does). A temperature that is not finite gives NaN; the
+     * temperatures must not overlap a row of {@code dst}.
      *
      * @return the number of outputs set to NaN, over all channels
+     * @throws IllegalArgumentException  if {@code celsiusPerFrame} overlaps a row of {@code dst}
      * @throws IllegalStateException     if a channel needs temperatures and none are given
      * @throws NullPointerException      if {@code frames}, {@code dst} or a row is null
      * @throws IndexOutOfBoundsException if a range is outside its array
@@ -100,6 +104,8 @@ public final class ChannelFrames {
                 throw new NullPointerException("dst[" + c + "]");
             }
             Objects.checkFromIndexSize(dstOff, frameCount, dst[c].length);
+            Checks.disjoint(celsiusPerFrame, celsiusOff, "celsiusPerFrame", dst[c], dstOff,
+                    "dst[" + c + "]", frameCount);
             if (channels[c].needsTemperature() && celsiusPerFrame == null) {
                 throw new IllegalStateException("channel " + c
                         + " corrects for thermal output: give the temperatures");

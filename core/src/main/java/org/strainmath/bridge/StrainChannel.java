@@ -378,16 +378,19 @@ public final class StrainChannel {
 
     /**
      * Converts {@code len} codes with the temperature of each sample in °C,
-     * {@code celsius[celsiusOff...]}, to corrected strains (m/m). Allocation-free.
+     * {@code celsius[celsiusOff...]}, to corrected strains (m/m). Allocation-free. A
+     * temperature that is not finite gives NaN; {@code celsius} must not overlap {@code dst}.
      *
      * @return the number of outputs set to NaN
      * @throws NullPointerException      if an array is null
      * @throws IndexOutOfBoundsException if a range is outside its array
+     * @throws IllegalArgumentException  if {@code celsius} overlaps {@code dst}
      */
     public int toStrain(int[] codes, int codesOff, double[] celsius, int celsiusOff,
             double[] dst, int dstOff, int len) {
         Objects.requireNonNull(celsius, "celsius");
         Objects.checkFromIndexSize(celsiusOff, len, celsius.length);
+        Checks.disjoint(celsius, celsiusOff, "celsius", dst, dstOff, "dst", len);
         return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len);
     }
 
@@ -447,14 +450,49 @@ public final class StrainChannel {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
             if (mayProve && proven(codes, start + shift, stop + shift)) {
-                bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop, factor);
-                nan += corrected(dst, start, stop, celsius, celsiusOff - dstOff, true);
+                if (thermal != null && celsius != null) {
+                    nan += provenWithThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
+                            start, stop);
+                } else {
+                    bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop,
+                            factor);
+                }
             } else {
                 codesToReadings(codes, shift, dst, start, stop);
                 nan += finish(dst, start, stop, celsius, celsiusOff - dstOff, false);
             }
         }
         return nan;
+    }
+
+    /**
+     * A proven chunk with the thermal correction: the bridge inverse less the thermal output in
+     * one loop, which reads each temperature at the output's own index (copied into dst first
+     * when the offsets differ, since C2 does not vectorise two double arrays read and written at
+     * different unknown offsets). Only a temperature that is not finite (the loop reports it)
+     * leads to a count, after those samples are set to NaN as the scalar path sets them.
+     */
+    private int provenWithThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
+            double[] dst, int start, int stop) {
+        double[] t = celsius;
+        if (celsiusShift != 0) {
+            System.arraycopy(celsius, start + celsiusShift, dst, start, stop - start);
+            t = dst;
+        }
+        boolean finite = bridge.codesToStrainLessThermal(codes, shift, scale, offset, t, dst,
+                start, stop, factor, thermal);
+        if (drift != 0.0) {
+            gaugeFactorInPlace(dst, celsius, celsiusShift, start, stop);
+        }
+        if (finite) {
+            return 0;
+        }
+        for (int i = start; i < stop; i++) {
+            if (!Double.isFinite(celsius[i + celsiusShift])) {
+                dst[i] = Double.NaN;
+            }
+        }
+        return Kernels.countNaN(dst, start, stop - start);
     }
 
     /** Whether every code of codes[from, to) lies within the proven codes. */

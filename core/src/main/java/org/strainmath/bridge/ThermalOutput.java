@@ -226,8 +226,9 @@ public final class ThermalOutput {
         }
 
         /**
-         * The strain (m/m) corrected at {@code celsius} °C; NaN in gives NaN out. The same
-         * function as the block method, bit for bit. Never throws.
+         * The strain (m/m) corrected at {@code celsius} °C; NaN in, or a temperature that is
+         * not finite, gives NaN out. The same function as the block method, bit for bit. Never
+         * throws.
          */
         public double correct(double strain, double celsius) {
             return apply(strain, celsius, q0, q1, q2, q3, q4);
@@ -236,17 +237,20 @@ public final class ThermalOutput {
         /**
          * Corrects {@code len} strains (m/m) from {@code strain[strainOff...]} with the
          * temperatures in °C of {@code celsius[celsiusOff...]} into {@code dst[dstOff...]}.
-         * Allocation-free; {@code dst} may be {@code strain} with the same offset.
+         * Allocation-free; {@code dst} may be {@code strain} with the same offset, and must not
+         * overlap {@code celsius}.
          *
          * @return the number of NaN outputs
          * @throws NullPointerException      if an array is null
          * @throws IndexOutOfBoundsException if a range is outside its array
+         * @throws IllegalArgumentException  if {@code dst} overlaps {@code celsius}
          */
         public int correct(double[] strain, int strainOff, double[] celsius, int celsiusOff,
                 double[] dst, int dstOff, int len) {
             Objects.requireNonNull(celsius, "celsius");
             Objects.checkFromIndexSize(celsiusOff, len, celsius.length);
             Checks.block(strain, strainOff, dst, dstOff, len);
+            Checks.disjoint(celsius, celsiusOff, "celsius", dst, dstOff, "dst", len);
             final double c0 = q0;
             final double c1 = q1;
             final double c2 = q2;
@@ -259,8 +263,18 @@ public final class ThermalOutput {
             return Kernels.countNaN(dst, dstOff, len);
         }
 
-        /** Corrects dst[start, end) in place with the temperatures at the same indices. */
-        void correctInPlace(double[] dst, double[] celsius, int celsiusShift, int start, int end) {
+        /** The coefficient of T^k of the composed quartic, k from 0 to 4, for the kernels. */
+        double coefficient(int k) {
+            return k == 0 ? q0 : k == 1 ? q1 : k == 2 ? q2 : k == 3 ? q3 : q4;
+        }
+
+        /**
+         * Corrects dst[start, end) in place with the temperatures celsius[i + celsiusShift]. A
+         * plain double loop: a finiteness probe inside it (as the channel's fused int[] loop
+         * has) stopped C2 from vectorising it, so the caller counts NaN in a pass of its own.
+         */
+        void correctInPlace(double[] dst, double[] celsius, int celsiusShift, int start,
+                int end) {
             final double c0 = q0;
             final double c1 = q1;
             final double c2 = q2;
@@ -278,9 +292,13 @@ public final class ThermalOutput {
             }
         }
 
+        /**
+         * strain − q(t), times (t − t + 1), which is exactly 1 for a finite t and NaN
+         * otherwise: an infinite temperature gives NaN, not an infinite strain.
+         */
         private static double apply(double strain, double t, double c0, double c1, double c2,
                 double c3, double c4) {
-            return strain - (c0 + t * (c1 + t * (c2 + t * (c3 + t * c4))));
+            return (strain - (c0 + t * (c1 + t * (c2 + t * (c3 + t * c4))))) * (t - t + 1.0);
         }
 
         /** {@code ThermalOutput.Correction[zeroed at 23.0 °C, K=2.1]}. */

@@ -102,4 +102,19 @@ public final class Checks {
         Objects.checkFromIndexSize(srcOff, len, srcLength);
         Objects.checkFromIndexSize(dstOff, len, dst.length);
     }
+
+    /**
+     * Checks that {@code a[aOff, aOff + len)} and {@code b[bOff, bOff + len)} share no element:
+     * for a kernel that reads {@code a} after it has begun to write {@code b}.
+     *
+     * @throws IllegalArgumentException if they are the same array and the ranges overlap
+     */
+    public static void disjoint(double[] a, int aOff, String aName, double[] b, int bOff,
+            String bName, int len) {
+        if (a == b && len > 0 && aOff < bOff + len && bOff < aOff + len) {
+            throw new IllegalArgumentException(aName + " must not overlap " + bName + ": "
+                    + aName + "[" + aOff + ", " + (aOff + len) + ") and " + bName + "[" + bOff
+                    + ", " + (bOff + len) + ") of the same array");
+        }
+    }
 }

@@ -138,6 +138,96 @@ class StrainChannelTest {
         }
     }
 
+    static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> thermalPaths() {
+        // Each form of the inverse, with and without a drifting gauge factor, with the
+        // temperatures at the output's offset and at another one.
+        java.util.stream.Stream.Builder<org.junit.jupiter.params.provider.Arguments> cases =
+                java.util.stream.Stream.builder();
+        for (boolean drifting : new boolean[] {false, true}) {
+            StrainGauge gauge = drifting
+                    ? GAUGE.withGaugeFactorTemperatureCoefficient(1.1, Temperature.ofCelsius(23))
+                    : GAUGE;
+            Bridge[] bridges = {Bridge.halfBending(gauge),
+                Bridge.quarter(gauge).withThreeWireLeads(Resistance.ofOhms(1.5)),
+                Bridge.halfOppositeArms(gauge).withExcitationLeads(Resistance.ofOhms(0.5))};
+            for (Bridge bridge : bridges) {
+                for (int celsiusOff : new int[] {2, 9}) {
+                    cases.add(org.junit.jupiter.params.provider.Arguments.of(bridge, drifting,
+                            celsiusOff));
+                }
+            }
+        }
+        return cases.build();
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.MethodSource("thermalPaths")
+    void theThermalKernelIsTheScalarBitForBitAndNonFiniteTemperaturesGiveNaN(Bridge bridge,
+            boolean drifting, int celsiusOff) {
+        // Oracle: the scalar toStrain(long, double) of the same channel, which a proven chunk
+        // computes in one loop with the thermal output, an unproven chunk in passes. A NaN or
+        // infinite temperature must give NaN and be counted, in either kind of chunk.
+        StrainChannel channel = StrainChannel.of(bridge, ADC).withTransverseCorrection(-0.25)
+                .withThermalOutput(ThermalOutput.ofCelsius(-28, 2.0, -0.05, 1.7e-4, -3e-7),
+                        Temperature.ofCelsius(22));
+        assertThat(channel.toStrain(40_000, Double.POSITIVE_INFINITY)).isNaN();
+        assertThat(channel.toStrain(40_000, Double.NEGATIVE_INFINITY)).isNaN();
+        assertThat(channel.toStrain(40_000, Double.NaN)).isNaN();
+        SplittableRandom random = new SplittableRandom(drifting ? 5 : 6);
+        int chunk = org.strainmath.internal.Kernels.CHUNK;
+        int n = 3 * chunk + 41;
+        int[] codes = new int[n];
+        double[] celsius = new double[n + celsiusOff];
+        for (int i = 0; i < n; i++) {
+            // chunks 0 and 1 proven, chunk 2 and the tail over the whole range
+            int half = i < 2 * chunk ? 1 << 22 : 1 << 23;
+            codes[i] = random.nextInt(-half, half);
+            celsius[i + celsiusOff] = random.nextDouble(-50, 200);
+        }
+        // chunk 0 stays finite; chunk 1 (proven) and 2 (not) hold non-finite temperatures
+        celsius[chunk + 7 + celsiusOff] = Double.NaN;
+        celsius[chunk + 300 + celsiusOff] = Double.POSITIVE_INFINITY;
+        celsius[2 * chunk + 9 + celsiusOff] = Double.NEGATIVE_INFINITY;
+        codes[2 * chunk + 20] = (1 << 23) - 1;
+        double[] expected = new double[n];
+        int expectedNaN = 0;
+        for (int i = 0; i < n; i++) {
+            expected[i] = channel.toStrain(codes[i], celsius[i + celsiusOff]);
+            expectedNaN += Double.isNaN(expected[i]) ? 1 : 0;
+        }
+        assertThat(expectedNaN).isGreaterThanOrEqualTo(4);
+        for (boolean mayProve : new boolean[] {true, false}) {
+            double[] out = new double[n + 2];
+            int nan = channel.convert(codes, 0, celsius, celsiusOff, out, 2, n, mayProve);
+            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("may prove: %s", mayProve)
+                    .isEqualTo(expected);
+            assertThat(nan).isEqualTo(expectedNaN);
+        }
+        double[] same = new double[n + celsiusOff];
+        assertThat(channel.toStrain(codes, 0, celsius, celsiusOff, same, celsiusOff, n))
+                .isEqualTo(expectedNaN);
+        assertThat(java.util.Arrays.copyOfRange(same, celsiusOff, n + celsiusOff))
+                .isEqualTo(expected);
+    }
+
+    @Test
+    void temperaturesThatOverlapTheOutputAreRefused() {
+        StrainChannel channel = StrainChannel.of(WIRED, ADC)
+                .withThermalOutput(ThermalOutput.ofCelsius(-28, 2.0), Temperature.ofCelsius(22));
+        double[] shared = new double[20];
+        int[] codes = new int[10];
+        assertThatThrownBy(() -> channel.toStrain(codes, 0, shared, 5, shared, 0, 10))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessage("celsius must not overlap dst: celsius[5, 15) and dst[0, 10) of the"
+                        + " same array");
+        assertThat(channel.toStrain(codes, 0, shared, 10, shared, 0, 10)).isZero();
+        ChannelFrames frames = ChannelFrames.of(channel, channel);
+        double[][] rows = {new double[10], shared};
+        assertThatThrownBy(() -> frames.toStrain(new int[20], 0, 10, shared, 3, rows, 0))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessageStartingWith("celsiusPerFrame must not overlap dst[1]: ");
+    }
+
     @Test
     void aChannelWithoutCorrectionsIsTheConverterThenTheBridge() {
         StrainChannel channel = StrainChannel.of(WIRED, ADC);
