@@ -273,6 +273,23 @@ class RosetteTest {
     }
 
     @Test
+    void aDeltaWorkedExampleGivesThePrintedPrincipalStrains() {
+        // Hibbeler, Mechanics of Materials, the worked example on strain rosettes in the
+        // chapter on strain transformation (Example 10.8 in the 8th edition; the example
+        // number, the edition and the figures below are from memory): a 60° rosette (gauges a,
+        // b, c at 0°, 60°, 120°) reads εa = 60, εb = 135, εc = 264 (10^-6). Printed:
+        // εx = 60, εy = 246, γxy = −149 (10^-6); ε1 = 272, ε2 = 33.9 (10^-6). The same figures
+        // follow by hand from the transformation equations (εy = 246 exactly, γxy = −148.96,
+        // ε1 = 272.15, ε2 = 33.85), which is the check that the memory is right.
+        RosetteStrains r = Rosette.delta().reduceMicrostrain(60, 135, 264);
+        assertThat(r.strain().exx() / MICRO).isCloseTo(60, within(1e-9));
+        assertThat(r.strain().eyy() / MICRO).isCloseTo(246, within(1e-9));
+        assertThat(r.strain().gxy() / MICRO).isCloseTo(-149, within(0.5));
+        assertThat(r.principal().e1().toMicrostrain()).isCloseTo(272, within(0.5));
+        assertThat(r.principal().e2().toMicrostrain()).isCloseTo(33.9, within(0.05));
+    }
+
+    @Test
     void degenerateGeometriesAreRefusedNamingTheAngles() {
         assertThatThrownBy(() -> Rosette.ofDegrees(0, 180, 45))
                 .isInstanceOf(IllegalArgumentException.class)
