@@ -142,6 +142,7 @@ public final class ChannelBudget {
      * @throws IllegalArgumentException if the uncertainty is negative
      */
     public ChannelBudget withTransverseSensitivityUncertainty(double kt) {
+        Checks.nonNegativeFinite(kt, "kt");
         if (channel.transverseRatio().isEmpty()) {
             throw new IllegalStateException("the channel has no transverse correction");
         }

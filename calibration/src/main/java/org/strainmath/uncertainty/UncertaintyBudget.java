@@ -73,7 +73,7 @@ public final class UncertaintyBudget {
         Objects.requireNonNull(model, "model");
         Objects.requireNonNull(inputs, "inputs");
         if (inputs.length == 0) {
-            throw new IllegalArgumentException("a budget needs at least one input quantity");
+            throw new IllegalArgumentException("inputs must hold at least one input quantity");
         }
         List<InputQuantity> list = new ArrayList<>();
         for (int i = 0; i < inputs.length; i++) {
@@ -108,13 +108,15 @@ public final class UncertaintyBudget {
      *                                  semi-definite
      */
     public UncertaintyBudget withCorrelation(String a, String b, double r) {
+        Objects.requireNonNull(a, "a");
+        Objects.requireNonNull(b, "b");
         int i = indexOf(a);
         int j = indexOf(b);
         if (i == j) {
             throw new IllegalArgumentException("a correlation needs two different inputs: " + a);
         }
         if (!(r >= -1 && r <= 1)) {
-            throw new IllegalArgumentException("correlation must be in [-1, 1]: " + r);
+            throw new IllegalArgumentException("correlation r must be in [-1, 1]: " + r);
         }
         double[][] next = new double[correlation.length][];
         for (int k = 0; k < next.length; k++) {

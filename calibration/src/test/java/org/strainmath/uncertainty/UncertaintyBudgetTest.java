@@ -124,7 +124,7 @@ class UncertaintyBudgetTest {
         InputQuantity b = InputQuantity.ofStandardUncertainty("b", 1, 0.1);
         InputQuantity c = InputQuantity.ofStandardUncertainty("c", 1, 0.1);
         UncertaintyBudget budget = UncertaintyBudget.of(x -> x[0] + x[1] + x[2], a, b, c);
-        assertThatThrownBy(() -> budget.withCorrelation("a", "b", 1.5)).hasMessage("correlation must be in [-1, 1]: 1.5");
+        assertThatThrownBy(() -> budget.withCorrelation("a", "b", 1.5)).hasMessage("correlation r must be in [-1, 1]: 1.5");
         assertThatThrownBy(() -> budget.withCorrelation("a", "z", 0.1)).hasMessage("no input named z");
         // r12 = r13 = 0.9 and r23 = −0.9 cannot hold together: not positive semi-definite.
         assertThatThrownBy(() -> budget.withCorrelation("a", "b", 0.9).withCorrelation("a", "c", 0.9)

@@ -142,14 +142,14 @@ public final class AdcInput {
     }
 
     /**
-     * A copy with the code offset {@code codes}: the code (in signed terms) the converter reads
-     * at zero input, subtracted before scaling.
+     * A copy with the code offset {@code codeOffset}, in codes: the code (in signed terms) the
+     * converter reads at zero input, subtracted before scaling.
      *
-     * @throws IllegalArgumentException if {@code codes} is not finite
+     * @throws IllegalArgumentException if {@code codeOffset} is not finite
      */
-    public AdcInput withCodeOffset(double codes) {
-        Checks.finite(codes, "codeOffset");
-        return new AdcInput(bits, coding, gain, fullScale, excitationVolts, codes + 0.0);
+    public AdcInput withCodeOffset(double codeOffset) {
+        Checks.finite(codeOffset, "codeOffset");
+        return new AdcInput(bits, coding, gain, fullScale, excitationVolts, codeOffset + 0.0);
     }
 
     /** The composed scale: V/V per code. */

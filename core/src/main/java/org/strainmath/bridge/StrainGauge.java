@@ -88,19 +88,19 @@ public final class StrainGauge {
      * @throws IllegalArgumentException if either is not positive and finite
      */
     public static StrainGauge ofOhms(double ohms, double gaugeFactor) {
-        Checks.positiveFinite(ohms, "nominalResistance");
+        Checks.positiveFinite(ohms, "ohms");
         return of(Resistance.ofOhms(ohms), gaugeFactor);
     }
 
     /**
-     * A copy with the transverse sensitivity {@code kt} as a fraction (0.012 for the 1.2 % of a
+     * A copy with the transverse sensitivity {@code kt} (Kt) as a fraction (0.012 for the 1.2 % of a
      * data sheet), defined as in ASTM E251: the ratio of the transverse to the axial gauge
      * factor.
      *
      * @throws IllegalArgumentException if {@code kt} is not in (−1, 1)
      */
     public StrainGauge withTransverseSensitivity(double kt) {
-        Checks.inOpenInterval(kt, -1, 1, "transverseSensitivity");
+        Checks.inOpenInterval(kt, -1, 1, "kt");
         return new StrainGauge(nominalResistance, gaugeFactor, kt + 0.0, calibrationPoissonRatio,
                 gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
@@ -131,15 +131,15 @@ public final class StrainGauge {
     }
 
     /**
-     * A copy with the active grid area {@code squareMillimetres} (grid length × grid width from
+     * A copy with the active grid area {@code gridArea} in mm² (grid length × grid width from
      * the data sheet), which sets the power the gauge may dissipate for a given power density.
      *
      * @throws IllegalArgumentException if the area is not positive and finite
      */
-    public StrainGauge withGridArea(double squareMillimetres) {
-        Checks.positiveFinite(squareMillimetres, "gridArea");
+    public StrainGauge withGridArea(double gridArea) {
+        Checks.positiveFinite(gridArea, "gridArea");
         return new StrainGauge(nominalResistance, gaugeFactor, transverseSensitivity,
-                calibrationPoissonRatio, squareMillimetres, gaugeFactorDrift, gaugeFactorCelsius);
+                calibrationPoissonRatio, gridArea, gaugeFactorDrift, gaugeFactorCelsius);
     }
 
     /** The active grid area in mm², or 0 if it was not given. */

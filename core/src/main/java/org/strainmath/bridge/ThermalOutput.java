@@ -247,6 +247,7 @@ public final class ThermalOutput {
          */
         public int correct(double[] strain, int strainOff, double[] celsius, int celsiusOff,
                 double[] dst, int dstOff, int len) {
+            Objects.requireNonNull(strain, "strain");
             Objects.requireNonNull(celsius, "celsius");
             Objects.checkFromIndexSize(celsiusOff, len, celsius.length);
             Checks.block(strain, strainOff, dst, dstOff, len);

@@ -442,7 +442,7 @@ public final class IsotropicMaterial {
      * @throws IllegalStateException if no coefficient of thermal expansion was given
      */
     public Strain freeThermalStrain(Temperature reference, Temperature actual) {
-        return Strain.of(requireAlpha() * actual.kelvinAbove(reference));
+        return Strain.of(requireAlpha() * kelvinAbove(actual, reference));
     }
 
     /**
@@ -462,7 +462,7 @@ public final class IsotropicMaterial {
      */
     public PlaneStrain mechanicalStrain(PlaneStrain total, Temperature reference,
             Temperature actual) {
-        double free = requireAlpha() * actual.kelvinAbove(reference);
+        double free = requireAlpha() * kelvinAbove(actual, reference);
         return new PlaneStrain(total.exx() - free, total.eyy() - free, total.gxy());
     }
 
@@ -474,7 +474,12 @@ public final class IsotropicMaterial {
      * @throws IllegalStateException if no coefficient of thermal expansion was given
      */
     public Strain mechanicalStrain(Strain total, Temperature reference, Temperature actual) {
-        return Strain.of(total.value() - requireAlpha() * actual.kelvinAbove(reference));
+        return Strain.of(total.value() - requireAlpha() * kelvinAbove(actual, reference));
+    }
+
+    private static double kelvinAbove(Temperature actual, Temperature reference) {
+        Objects.requireNonNull(reference, "reference");
+        return Objects.requireNonNull(actual, "actual").kelvinAbove(reference);
     }
 
     private double requireAlpha() {

@@ -158,7 +158,7 @@ public final class OrthotropicLamina {
      * @throws NullPointerException if an argument is null
      */
     public PlaneStress stressInMaterialAxes(PlaneStrain strainInXY, Angle plyAngle) {
-        return reduced.stressOf(strainInXY.rotatedBy(plyAngle));
+        return reduced.stressOf(strainInMaterialAxes(strainInXY, plyAngle));
     }
 
     /**
@@ -168,7 +168,8 @@ public final class OrthotropicLamina {
      * @throws NullPointerException if an argument is null
      */
     public PlaneStrain strainInMaterialAxes(PlaneStrain strainInXY, Angle plyAngle) {
-        return strainInXY.rotatedBy(plyAngle);
+        Objects.requireNonNull(plyAngle, "plyAngle");
+        return Objects.requireNonNull(strainInXY, "strainInXY").rotatedBy(plyAngle);
     }
 
     @Override

@@ -28,12 +28,12 @@ public final class Strain implements Comparable<Strain> {
     }
 
     /**
-     * The strain {@code value} in m/m (2.5e-4 is 250 µε).
+     * The strain {@code strain} in m/m (2.5e-4 is 250 µε).
      *
-     * @throws IllegalArgumentException if {@code value} is NaN or infinite
+     * @throws IllegalArgumentException if {@code strain} is NaN or infinite
      */
-    public static Strain of(double value) {
-        return new Strain(Checks.finite(value, "strain") + 0.0);
+    public static Strain of(double strain) {
+        return new Strain(Checks.finite(strain, "strain") + 0.0);
     }
 
     /**

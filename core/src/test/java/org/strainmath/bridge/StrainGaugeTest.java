@@ -65,7 +65,7 @@ class StrainGaugeTest {
     void resistanceMustBePositiveAndFinite(double bad) {
         assertThatThrownBy(() -> StrainGauge.ofOhms(bad, 2))
                 .isInstanceOf(IllegalArgumentException.class)
-                .hasMessage("nominalResistance must be > 0 and finite: " + bad);
+                .hasMessage("ohms must be > 0 and finite: " + bad);
     }
 
     @Test
@@ -86,7 +86,7 @@ class StrainGaugeTest {
     void transverseSensitivityMustBeAFractionBelowOne(double bad) {
         assertThatThrownBy(() -> StrainGauge.ofOhms(120, 2).withTransverseSensitivity(bad))
                 .isInstanceOf(IllegalArgumentException.class)
-                .hasMessage("transverseSensitivity must be in (-1.0, 1.0): " + bad);
+                .hasMessage("kt must be in (-1.0, 1.0): " + bad);
     }
 
     @Test

@@ -15,12 +15,13 @@ final class Blocks {
 
     /**
      * Checks {@code readings} (one array per gauge, {@code gauges} of them) from {@code srcOff}
-     * and the outputs from {@code dstOff}, {@code len} samples each (null for a missing second
-     * or third output): every output a different array, and an input array only at the same
-     * offset. No allocation.
+     * and the outputs from {@code dstOff}, {@code len} samples each, each output with the name
+     * of its parameter (a null name for a kernel without a second or third output): every
+     * output present, a different array, and an input array only at the same offset. No
+     * allocation.
      */
     static void block(double[][] readings, int gauges, int srcOff, int dstOff, int len,
-            double[] o1, double[] o2, double[] o3) {
+            double[] o1, String n1, double[] o2, String n2, double[] o3, String n3) {
         Objects.requireNonNull(readings, "readings");
         if (readings.length != gauges) {
             throw new IllegalArgumentException("readings must hold one array per gauge, "
@@ -32,28 +33,29 @@ final class Blocks {
             }
             Objects.checkFromIndexSize(srcOff, len, readings[j].length);
         }
-        output(readings, srcOff, dstOff, len, o1);
-        if (o2 != null) {
-            output(readings, srcOff, dstOff, len, o2);
+        output(readings, srcOff, dstOff, len, o1, n1);
+        if (n2 != null) {
+            output(readings, srcOff, dstOff, len, o2, n2);
             if (o2 == o1) {
-                throw new IllegalArgumentException("the outputs must be different arrays");
+                throw new IllegalArgumentException(n1 + " and " + n2 + " must be different arrays");
             }
         }
-        if (o3 != null) {
-            output(readings, srcOff, dstOff, len, o3);
+        if (n3 != null) {
+            output(readings, srcOff, dstOff, len, o3, n3);
             if (o3 == o1 || o3 == o2) {
-                throw new IllegalArgumentException("the outputs must be different arrays");
+                throw new IllegalArgumentException(n1 + ", " + n2 + " and " + n3
+                        + " must be different arrays");
             }
         }
     }
 
     private static void output(double[][] readings, int srcOff, int dstOff, int len,
-            double[] out) {
-        Objects.checkFromIndexSize(dstOff, len, Objects.requireNonNull(out, "output").length);
+            double[] out, String name) {
+        Objects.checkFromIndexSize(dstOff, len, Objects.requireNonNull(out, name).length);
         if (srcOff != dstOff) {
             for (double[] in : readings) {
                 if (out == in) {
-                    throw new IllegalArgumentException("an output that is also an input array "
+                    throw new IllegalArgumentException(name + " is also an input array and "
                             + "needs dstOff == srcOff: " + dstOff + " != " + srcOff);
                 }
             }

@@ -165,7 +165,7 @@ public final class Rosette {
             theta[j] = Objects.requireNonNull(angles[j], "angles[" + j + "]").toRadians();
         }
         if (theta.length < 3) {
-            throw new IllegalArgumentException("a rosette needs at least three gauges: "
+            throw new IllegalArgumentException("angles must give at least three gauges: "
                     + anglesText(theta));
         }
         return new Rosette("general", theta, null, false, 0, null, null, false);
@@ -178,6 +178,10 @@ public final class Rosette {
      */
     public static Rosette ofDegrees(double... degrees) {
         Objects.requireNonNull(degrees, "degrees");
+        if (degrees.length < 3) {
+            throw new IllegalArgumentException("degrees must give at least three gauges: "
+                    + anglesText(radians(degrees)));
+        }
         Angle[] angles = new Angle[degrees.length];
         for (int j = 0; j < degrees.length; j++) {
             angles[j] = Angle.ofDegrees(degrees[j]);
@@ -557,7 +561,7 @@ public final class Rosette {
      */
     public int toPrincipalStrains(double[][] readings, int srcOff, double[] e1, double[] e2,
             int dstOff, int len) {
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, e2, null);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, "e1", e2, "e2", null, null);
         return RosetteKernels.strains(readings, srcOff, rowC, rowD, rowH, e1, e2, dstOff, len);
     }
 
@@ -575,7 +579,7 @@ public final class Rosette {
     public int toPrincipalStrainsAndVonMises(double[][] readings, int srcOff, double[] e1,
             double[] e2, double[] vonMises, int dstOff, int len) {
         requireMaterial();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, e2, vonMises);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, e1, "e1", e2, "e2", vonMises, "vonMises");
         return RosetteKernels.strainsAndVonMises(readings, srcOff, rowC, rowD, rowH, stiffness,
                 poisson, e1, e2, vonMises, dstOff, len);
     }
@@ -592,7 +596,7 @@ public final class Rosette {
      */
     public int toPrincipalAngles(double[][] readings, int srcOff, double[] radians, int dstOff,
             int len) {
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, radians, null, null);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, radians, "radians", null, null, null, null);
         return RosetteKernels.angle(readings, srcOff, rowC, rowD, rowH, radians, dstOff, len);
     }
 
@@ -607,7 +611,7 @@ public final class Rosette {
      */
     public int toStrainState(double[][] readings, int srcOff, double[] exx, double[] eyy,
             double[] gxy, int dstOff, int len) {
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, exx, eyy, gxy);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, exx, "exx", eyy, "eyy", gxy, "gxy");
         return RosetteKernels.state(readings, srcOff, rowC, rowD, rowH, exx, eyy, gxy, dstOff,
                 len);
     }
@@ -626,7 +630,7 @@ public final class Rosette {
     public int toPrincipalStresses(double[][] readings, int srcOff, double[] s1, double[] s2,
             int dstOff, int len) {
         requireMaterial();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, s1, s2, null);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, s1, "s1", s2, "s2", null, null);
         return RosetteKernels.stresses(RosetteKernels.Result.STRESSES, readings, srcOff, rowC,
                 rowD, rowH, stiffness, poisson, s1, s2, dstOff, len);
     }
@@ -646,7 +650,7 @@ public final class Rosette {
     public int toVonMises(double[][] readings, int srcOff, double[] vonMises, int dstOff,
             int len) {
         requireMaterial();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, vonMises, null, null);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, vonMises, "vonMises", null, null, null, null);
         return RosetteKernels.stresses(RosetteKernels.Result.VON_MISES, readings, srcOff, rowC,
                 rowD, rowH, stiffness, poisson, vonMises, null, dstOff, len);
     }
@@ -663,7 +667,7 @@ public final class Rosette {
      */
     public int toTresca(double[][] readings, int srcOff, double[] tresca, int dstOff, int len) {
         requireMaterial();
-        Blocks.block(readings, rowC.length, srcOff, dstOff, len, tresca, null, null);
+        Blocks.block(readings, rowC.length, srcOff, dstOff, len, tresca, "tresca", null, null, null, null);
         return RosetteKernels.stresses(RosetteKernels.Result.TRESCA, readings, srcOff, rowC,
                 rowD, rowH, stiffness, poisson, tresca, null, dstOff, len);
     }

@@ -123,9 +123,11 @@ class RosetteKernelTest {
                 .isInstanceOf(IllegalArgumentException.class)
                 .hasMessage("readings must hold one array per gauge, 3: 2");
         assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 0, a, a, 0, 4))
-                .hasMessage("the outputs must be different arrays");
+                .hasMessage("e1 and e2 must be different arrays");
+        assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 0, a, null, 0, 4))
+                .isInstanceOf(NullPointerException.class).hasMessage("e2");
         assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 0, in[1], b, 1, 3))
-                .hasMessage("an output that is also an input array needs dstOff == srcOff: 1 != 0");
+                .hasMessage("e1 is also an input array and needs dstOff == srcOff: 1 != 0");
         assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 1, a, b, 0, 4))
                 .isInstanceOf(IndexOutOfBoundsException.class);
         assertThatThrownBy(() -> rosette.toPrincipalStrains(new double[][] {a, null, b}, 0, a, b, 0, 4))

@@ -298,7 +298,9 @@ class RosetteTest {
         assertThatThrownBy(() -> Rosette.ofDegrees(10, 50, 10))
                 .hasMessageStartingWith("gauges a and c lie along one direction");
         assertThatThrownBy(() -> Rosette.ofDegrees(0, 90))
-                .hasMessage("a rosette needs at least three gauges: 0.0°, 90.0°");
+                .hasMessage("degrees must give at least three gauges: 0.0°, 90.0°");
+        assertThatThrownBy(() -> Rosette.ofAngles(Angle.ZERO, Angle.ofDegrees(90)))
+                .hasMessage("angles must give at least three gauges: 0.0°, 90.0°");
         assertThatThrownBy(() -> Rosette.rectangular().withMeasuredAngles(Angle.ZERO, Angle.ZERO))
                 .hasMessage("actual must give one angle per gauge, 3: 2");
         assertThatThrownBy(() -> Rosette.rectangular().reduceMicrostrain(1, 2))
