@@ -1200,9 +1200,8 @@ public final class Bridge {
         }
     }
 
-    // The thermal output q(t) = p0 + t·(p1 + t·(p2 + t·(p3 + t·p4))) is written out in each of
-    // the three loops below rather than called: it is the same expression as
-    // ThermalOutput.Correction's, checked bit for bit by the channel tests.
+    // The thermal output q(t) is ThermalOutput.Correction.polynomial, the expression that the
+    // scalar path evaluates too, so that both give the same bits.
 
     private boolean codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
             double[] celsius, double[] dst, int start, int end, double factor,
@@ -1219,7 +1218,7 @@ public final class Bridge {
             double t = celsius[i];
             finite &= Kernels.finiteBit(t);
             dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor
-                    - (p0 + t * (p1 + t * (p2 + t * (p3 + t * p4))));
+                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
         }
         return finite == 1;
     }
@@ -1240,7 +1239,7 @@ public final class Bridge {
             double t = celsius[i];
             finite &= Kernels.finiteBit(t);
             dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor
-                    - (p0 + t * (p1 + t * (p2 + t * (p3 + t * p4))));
+                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
         }
         return finite == 1;
     }
@@ -1264,7 +1263,7 @@ public final class Bridge {
             double t = celsius[i];
             finite &= Kernels.finiteBit(t);
             dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
-                    * factor - (p0 + t * (p1 + t * (p2 + t * (p3 + t * p4))));
+                    * factor - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
         }
         return finite == 1;
     }

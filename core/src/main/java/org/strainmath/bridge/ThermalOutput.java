@@ -299,7 +299,16 @@ public final class ThermalOutput {
          */
         private static double apply(double strain, double t, double c0, double c1, double c2,
                 double c3, double c4) {
-            return (strain - (c0 + t * (c1 + t * (c2 + t * (c3 + t * c4))))) * (t - t + 1.0);
+            return (strain - polynomial(t, c0, c1, c2, c3, c4)) * (t - t + 1.0);
+        }
+
+        /**
+         * q(t) by Horner's rule: the one expression that every path evaluates (small enough
+         * that C2 inlines it into the kernels' loops, which stay vectorised).
+         */
+        static double polynomial(double t, double c0, double c1, double c2, double c3,
+                double c4) {
+            return c0 + t * (c1 + t * (c2 + t * (c3 + t * c4)));
         }
 
         /** {@code ThermalOutput.Correction[zeroed at 23.0 °C, K=2.1]}. */
