@@ -469,8 +469,9 @@ public final class StrainChannel {
      * A proven chunk with the thermal correction: the bridge inverse less the thermal output in
      * one loop, which reads each temperature at the output's own index (copied into dst first
      * when the offsets differ, since C2 does not vectorise two double arrays read and written at
-     * different unknown offsets). Only a temperature that is not finite (the loop reports it)
-     * leads to a count, after those samples are set to NaN as the scalar path sets them.
+     * different unknown offsets). Without a drifting gauge factor, only a temperature that is
+     * not finite (the loop reports it) leads to a count, after those samples are set to NaN as
+     * the scalar path sets them.
      */
     private int provenWithThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
             double[] dst, int start, int stop) {
@@ -484,15 +485,16 @@ public final class StrainChannel {
         if (drift != 0.0) {
             gaugeFactorInPlace(dst, celsius, celsiusShift, start, stop);
         }
-        if (finite) {
-            return 0;
-        }
-        for (int i = start; i < stop; i++) {
-            if (!Double.isFinite(celsius[i + celsiusShift])) {
-                dst[i] = Double.NaN;
+        if (!finite) {
+            for (int i = start; i < stop; i++) {
+                if (!Double.isFinite(celsius[i + celsiusShift])) {
+                    dst[i] = Double.NaN;
+                }
             }
         }
-        return Kernels.countNaN(dst, start, stop - start);
+        // With a drifting gauge factor, 1 + c·(T − Tref) can reach 0 at an absurd but finite
+        // temperature, so such a chunk is counted even when every temperature is finite.
+        return finite && drift == 0.0 ? 0 : Kernels.countNaN(dst, start, stop - start);
     }
 
     /** Whether every code of codes[from, to) lies within the proven codes. */

@@ -211,6 +211,29 @@ class StrainChannelTest {
     }
 
     @Test
+    void aDriftingGaugeFactorThatVanishesGivesNaNAndIsCounted() {
+        // Definition (StrainChannel's class comment): ε = ε'·K/K(T), K(T) = K·(1 + c·(T − Tref)).
+        // With c = 1.1 %/100 K, K(T) is 0 at Tref − 1/c, an absurd but finite temperature; at
+        // zero strain the quotient is 0/0. The proven fused loop must count it as the scalar
+        // path reports it.
+        StrainGauge drifting = GAUGE.withGaugeFactorTemperatureCoefficient(1.1,
+                Temperature.ofCelsius(23));
+        StrainChannel channel = StrainChannel.of(Bridge.halfBending(drifting), ADC)
+                .withThermalOutput(ThermalOutput.ofCelsius(0.0), Temperature.ofCelsius(23));
+        double vanishing = 23 - 1 / 1.1e-4;
+        int[] codes = {0, 0, 1000};
+        double[] celsius = {vanishing, 23, 23};
+        double[] out = new double[3];
+        int nan = channel.toStrain(codes, 0, celsius, 0, out, 0, 3);
+        for (int i = 0; i < 3; i++) {
+            assertThat(Double.doubleToRawLongBits(out[i]))
+                    .isEqualTo(Double.doubleToRawLongBits(channel.toStrain(codes[i], celsius[i])));
+        }
+        assertThat(out[0]).isNaN();
+        assertThat(nan).isEqualTo(1);
+    }
+
+    @Test
     void temperaturesThatOverlapTheOutputAreRefused() {
         StrainChannel channel = StrainChannel.of(WIRED, ADC)
                 .withThermalOutput(ThermalOutput.ofCelsius(-28, 2.0), Temperature.ofCelsius(22));
