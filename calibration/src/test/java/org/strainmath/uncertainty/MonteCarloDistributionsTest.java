@@ -119,8 +119,8 @@ class MonteCarloDistributionsTest {
         assertThat(product.combinedStandardUncertainty()).isCloseTo(0.06, within(1e-9));
         assertThat(product.secondOrderVariance()).isCloseTo(0.0036, within(1e-10));
         // (No cubic in one input here: the budget's sensitivities are central differences
-        // over ±u, the input's standard uncertainty, which for x³ adds u²·f'''/6 to the
-        // derivative; the models here have exact central differences.)
+        // over ±u, as GUM 5.1.3, note 2 allows, which for x³ add u²·f'''/6 to the derivative;
+        // the models here have exact central differences.)
         // y = x1²·x2 at (1, 2), u1 = 0.1, u2 = 0.2: the mixed terms count once per order of
         // i and j. ∂²f/∂x1² = 2x2 = 4, ∂²f/∂x1∂x2 = 2x1 = 2, ∂³f/∂x1∂x2² = 0,
         // ∂³f/∂x2∂x1² = 2, ∂³f/∂x1³ = 0, c1 = 2x1x2 = 4, c2 = x1² = 1.
