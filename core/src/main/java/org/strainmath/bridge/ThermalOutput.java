@@ -271,8 +271,10 @@ public final class ThermalOutput {
 
         /**
          * Corrects dst[start, end) in place with the temperatures celsius[i + celsiusShift]. A
-         * plain double loop: a finiteness probe inside it (as the channel's fused int[] loop
-         * has) stopped C2 from vectorising it, so the caller counts NaN in a pass of its own.
+         * plain double loop, so without the finiteness probe of the channel's fused int[] loop:
+         * that probe slowed every plain double loop it was tried in (bridge inverse, plane
+         * stress, rosette; this loop itself was not measured with it), and the caller counts
+         * NaN in a pass of its own.
          */
         void correctInPlace(double[] dst, double[] celsius, int celsiusShift, int start,
                 int end) {
