@@ -942,16 +942,48 @@ public final class Bridge {
      * @throws IndexOutOfBoundsException if a range is outside its array
      */
     public int toStrain(double[] src, int srcOff, double[] dst, int dstOff, int len) {
+        return toStrain(src, srcOff, dst, dstOff, len, Kernels.REDUCTIONS_IN_LOOP);
+    }
+
+    /**
+     * {@link #toStrain(double[], int, double[], int, int)} with the way of counting chosen:
+     * a min reduction inside the loop ({@code probeInLoop}, for JVMs whose C2 keeps such a loop
+     * vectorised) or a pass of its own after it. Both give the same outputs and count; the
+     * tests run both on every JDK.
+     */
+    int toStrain(double[] src, int srcOff, double[] dst, int dstOff, int len,
+            boolean probeInLoop) {
         Checks.block(src, srcOff, dst, dstOff, len);
         double[] from = Kernels.sameIndexSource(src, srcOff, dst, dstOff, len);
         int nan = 0;
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            toStrainWithin(from, dst, start, stop, ratioLow, ratioHigh);
-            nan += Kernels.countNaN(dst, start, stop - start);
+            if (probeInLoop) {
+                double probe = toStrainProbed(from, dst, start, stop, ratioLow, ratioHigh);
+                nan += probe == 0 ? 0 : Kernels.countNaN(dst, start, stop - start);
+            } else {
+                toStrainWithin(from, dst, start, stop, ratioLow, ratioHigh);
+                nan += Kernels.countNaN(dst, start, stop - start);
+            }
         }
         return nan;
+    }
+
+    /**
+     * As {@link #toStrainWithin}, and returns the least of ε·0 over the chunk: 0 when every
+     * output is finite, NaN otherwise ({@link Kernels#REDUCTIONS_IN_LOOP}).
+     */
+    private double toStrainProbed(double[] from, double[] dst, int start, int end, double low,
+            double high) {
+        switch (form) {
+            case LINEAR:
+                return inverseLinearProbed(from, dst, start, end, low, high);
+            case FIRST_DEGREE:
+                return inverseFirstDegreeProbed(from, dst, start, end, low, high);
+            default:
+                return inverseQuadraticProbed(from, dst, start, end, low, high);
+        }
     }
 
     /**
@@ -1077,25 +1109,57 @@ public final class Bridge {
         }
     }
 
+    /** What a fused thermal loop found: its codes outside the given bounds (the chunk must be redone). */
+    static final int CODES_OUTSIDE = 0;
+    /** What a fused thermal loop found: codes within the bounds, every temperature finite. */
+    static final int PROVEN = 1;
+    /** What a fused thermal loop found: codes within the bounds, a temperature not finite. */
+    static final int PROVEN_NON_FINITE_TEMPERATURE = 2;
+
     /**
      * As {@link #codesToStrainPlain}, less the thermal output of the temperature of each sample,
      * t = celsius[i] (which may be dst itself: each t is read before dst[i] is written), in one
-     * loop: plain(code·scale + offset)·factor − q(t). Returns whether every t was finite; if
-     * so, the results equal {@code thermal.correct(plain·factor, t)} bit for bit.
+     * loop: plain(code·scale + offset)·factor − q(t). The loop also takes the least and greatest
+     * code and ANDs {@link Kernels#finiteBit} over the temperatures (C2 keeps it vectorised on
+     * JDK 17 and 25): {@link #CODES_OUTSIDE} if a code lies outside [low, high] (the outputs are
+     * then to be recomputed by the checked path), else {@link #PROVEN} or
+     * {@link #PROVEN_NON_FINITE_TEMPERATURE}. For {@link #PROVEN}, the results equal
+     * {@code thermal.correct(plain·factor, t)} bit for bit.
      */
-    boolean codesToStrainLessThermal(int[] codes, int shift, double scale, double offset,
+    int codesToStrainLessThermal(int[] codes, int shift, double scale, double offset,
             double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
+            ThermalOutput.Correction thermal, int low, int high) {
         switch (form) {
             case LINEAR:
                 return codesLinearLessThermal(codes, shift, scale, offset, celsius, dst, start,
-                        end, factor, thermal);
+                        end, factor, thermal, low, high);
             case FIRST_DEGREE:
                 return codesFirstDegreeLessThermal(codes, shift, scale, offset, celsius, dst,
-                        start, end, factor, thermal);
+                        start, end, factor, thermal, low, high);
             default:
                 return codesQuadraticLessThermal(codes, shift, scale, offset, celsius, dst, start,
-                        end, factor, thermal);
+                        end, factor, thermal, low, high);
+        }
+    }
+
+    /**
+     * As {@link #codesToStrainPlain}, taking the least and greatest code in the same loop:
+     * whether every code lay within [low, high]. If not, the outputs are to be recomputed by
+     * the checked path. For JVMs whose C2 keeps the min and max reductions in the vectorised
+     * loop ({@link Kernels#REDUCTIONS_IN_LOOP}); it saves the pass over the codes.
+     */
+    boolean codesToStrainPlainWithin(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor, int low, int high) {
+        switch (form) {
+            case LINEAR:
+                return codesLinearPlainWithin(codes, shift, scale, offset, dst, start, end,
+                        factor, low, high);
+            case FIRST_DEGREE:
+                return codesFirstDegreePlainWithin(codes, shift, scale, offset, dst, start, end,
+                        factor, low, high);
+            default:
+                return codesQuadraticPlainWithin(codes, shift, scale, offset, dst, start, end,
+                        factor, low, high);
         }
     }
 
@@ -1167,6 +1231,57 @@ public final class Bridge {
         }
     }
 
+    private double inverseLinearProbed(double[] from, double[] dst, int start, int end,
+            double low, double high) {
+        final double c0 = n0;
+        final double c1 = n1;
+        double probe = 0;
+        for (int i = start; i < end; i++) {
+            double e = inverseLinear(from[i], c0, c1, low, high);
+            dst[i] = e;
+            probe = Math.min(probe, e * 0.0);
+        }
+        return probe;
+    }
+
+    private double inverseFirstDegreeProbed(double[] from, double[] dst, int start, int end,
+            double low, double high) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        double probe = 0;
+        for (int i = start; i < end; i++) {
+            double e = inverseFirstDegree(from[i], c0, c1, e1, low, high);
+            dst[i] = e;
+            probe = Math.min(probe, e * 0.0);
+        }
+        return probe;
+    }
+
+    private double inverseQuadraticProbed(double[] from, double[] dst, int start, int end,
+            double low, double high) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        double probe = 0;
+        for (int i = start; i < end; i++) {
+            double e = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
+            dst[i] = e;
+            probe = Math.min(probe, e * 0.0);
+        }
+        return probe;
+    }
+
+    private static int thermalStatus(int min, int max, int low, int high, int finite) {
+        if (min < low || max > high) {
+            return CODES_OUTSIDE;
+        }
+        return finite == 1 ? PROVEN : PROVEN_NON_FINITE_TEMPERATURE;
+    }
+
     private void codesLinearPlain(int[] codes, int shift, double scale, double offset,
             double[] dst, int start, int end, double factor) {
         final double c0 = n0;
@@ -1174,6 +1289,21 @@ public final class Bridge {
         for (int i = start; i < end; i++) {
             dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor;
         }
+    }
+
+    private boolean codesLinearPlainWithin(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor, int low, int high) {
+        final double c0 = n0;
+        final double c1 = n1;
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
+        for (int i = start; i < end; i++) {
+            int code = codes[i + shift];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
+            dst[i] = plainLinear(code * scale + offset, c0, c1) * factor;
+        }
+        return min >= low && max <= high;
     }
 
     private void codesFirstDegreePlain(int[] codes, int shift, double scale, double offset,
@@ -1184,6 +1314,22 @@ public final class Bridge {
         for (int i = start; i < end; i++) {
             dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor;
         }
+    }
+
+    private boolean codesFirstDegreePlainWithin(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor, int low, int high) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
+        for (int i = start; i < end; i++) {
+            int code = codes[i + shift];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
+            dst[i] = plainFirstDegree(code * scale + offset, c0, c1, e1) * factor;
+        }
+        return min >= low && max <= high;
     }
 
     private void codesQuadraticPlain(int[] codes, int shift, double scale, double offset,
@@ -1200,12 +1346,32 @@ public final class Bridge {
         }
     }
 
+    private boolean codesQuadraticPlainWithin(int[] codes, int shift, double scale, double offset,
+            double[] dst, int start, int end, double factor, int low, int high) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
+        for (int i = start; i < end; i++) {
+            int code = codes[i + shift];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
+            dst[i] = plainQuadratic(code * scale + offset, c0, c1, c2, e1, e2, sign)
+                    * factor;
+        }
+        return min >= low && max <= high;
+    }
+
     // The thermal output q(t) is ThermalOutput.Correction.polynomial, the expression that the
     // scalar path evaluates too, so that both give the same bits.
 
-    private boolean codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
+    private int codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
             double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
+            ThermalOutput.Correction thermal, int low, int high) {
         final double c0 = n0;
         final double c1 = n1;
         final double p0 = thermal.coefficient(0);
@@ -1214,18 +1380,23 @@ public final class Bridge {
         final double p3 = thermal.coefficient(3);
         final double p4 = thermal.coefficient(4);
         int finite = 1;
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
         for (int i = start; i < end; i++) {
             double t = celsius[i];
+            int code = codes[i + shift];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
             finite &= Kernels.finiteBit(t);
-            dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor
+            dst[i] = plainLinear(code * scale + offset, c0, c1) * factor
                     - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
         }
-        return finite == 1;
+        return thermalStatus(min, max, low, high, finite);
     }
 
-    private boolean codesFirstDegreeLessThermal(int[] codes, int shift, double scale,
+    private int codesFirstDegreeLessThermal(int[] codes, int shift, double scale,
             double offset, double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
+            ThermalOutput.Correction thermal, int low, int high) {
         final double c0 = n0;
         final double c1 = n1;
         final double e1 = d1;
@@ -1235,18 +1406,23 @@ public final class Bridge {
         final double p3 = thermal.coefficient(3);
         final double p4 = thermal.coefficient(4);
         int finite = 1;
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
         for (int i = start; i < end; i++) {
             double t = celsius[i];
+            int code = codes[i + shift];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
             finite &= Kernels.finiteBit(t);
-            dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor
+            dst[i] = plainFirstDegree(code * scale + offset, c0, c1, e1) * factor
                     - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
         }
-        return finite == 1;
+        return thermalStatus(min, max, low, high, finite);
     }
 
-    private boolean codesQuadraticLessThermal(int[] codes, int shift, double scale,
+    private int codesQuadraticLessThermal(int[] codes, int shift, double scale,
             double offset, double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
+            ThermalOutput.Correction thermal, int low, int high) {
         final double c0 = n0;
         final double c1 = n1;
         final double c2 = n2;
@@ -1259,13 +1435,18 @@ public final class Bridge {
         final double p3 = thermal.coefficient(3);
         final double p4 = thermal.coefficient(4);
         int finite = 1;
+        int min = Integer.MAX_VALUE;
+        int max = Integer.MIN_VALUE;
         for (int i = start; i < end; i++) {
             double t = celsius[i];
+            int code = codes[i + shift];
+            min = Math.min(min, code);
+            max = Math.max(max, code);
             finite &= Kernels.finiteBit(t);
-            dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
+            dst[i] = plainQuadratic(code * scale + offset, c0, c1, c2, e1, e2, sign)
                     * factor - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
         }
-        return finite == 1;
+        return thermalStatus(min, max, low, high, finite);
     }
 
     private void linearPlain(double[] dst, int start, int end, double factor) {

@@ -429,35 +429,56 @@ public final class StrainChannel {
 
     private int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff,
             double[] dst, int dstOff, int len) {
-        return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len, true);
+        return convert(codes, codesOff, celsius, celsiusOff, dst, dstOff, len,
+                Kernels.REDUCTIONS_IN_LOOP ? Proof.IN_LOOP : Proof.PASS_BEFORE);
+    }
+
+    /** How the int[] kernel proves a chunk of codes regular; package-private for tests. */
+    enum Proof {
+        /** Never: every chunk takes the checked path (the reference for tests). */
+        NONE,
+        /** A min/max pass over the codes before the plain loop (JDK 17 to 24). */
+        PASS_BEFORE,
+        /** The plain loop takes the codes' least and greatest itself; redo if outside (JDK 25). */
+        IN_LOOP
     }
 
     /**
      * The int[] kernel. Per chunk, the codes' least and greatest values decide the path: inside
      * the proven codes, one vectorised loop with one division per sample and no count; else the
-     * readings, the checked inverse and a count of the NaN it gave. {@code mayProve} false takes
-     * the second path always (package-private so that tests compare both); both give the same
-     * bits. The proven path converts and inverts in one loop, which C2 vectorises on JDK 17
-     * and 25 alike (measured with {@code ChannelBenchmark}; on JDK 17 converting the codes in a
-     * loop of their own first was slower).
+     * readings, the checked inverse and a count of the NaN it gave. {@code proof} says how the
+     * least and greatest are found: by a pass before the loop, or by the loop itself, which
+     * then hands a chunk with a code outside to the checked path, which overwrites what the
+     * loop wrote (see {@link Kernels#REDUCTIONS_IN_LOOP}; the thermal loop always takes them
+     * itself). All give the same bits; the tests compare every one with the scalar path.
      */
     int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff, double[] dst,
-            int dstOff, int len, boolean mayProve) {
+            int dstOff, int len, Proof proof) {
         Checks.block(Objects.requireNonNull(codes, "codes").length, codesOff, dst, dstOff, len);
         final int shift = codesOff - dstOff;
+        final boolean withThermal = thermal != null && celsius != null;
         int nan = 0;
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            if (mayProve && proven(codes, start + shift, stop + shift)) {
-                if (thermal != null && celsius != null) {
-                    nan += provenWithThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
-                            start, stop);
-                } else {
-                    bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop,
-                            factor);
-                }
+            boolean converted;
+            if (proof == Proof.NONE) {
+                converted = false;
+            } else if (withThermal) {
+                int counted = provenWithThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
+                        start, stop);
+                converted = counted >= 0;
+                nan += Math.max(counted, 0);
+            } else if (proof == Proof.IN_LOOP) {
+                converted = bridge.codesToStrainPlainWithin(codes, shift, scale, offset, dst,
+                        start, stop, factor, provenLow, provenHigh);
+            } else if (proven(codes, start + shift, stop + shift)) {
+                bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop, factor);
+                converted = true;
             } else {
+                converted = false;
+            }
+            if (!converted) {
                 codesToReadings(codes, shift, dst, start, stop);
                 nan += finish(dst, start, stop, celsius, celsiusOff - dstOff, false);
             }
@@ -466,12 +487,15 @@ public final class StrainChannel {
     }
 
     /**
-     * A proven chunk with the thermal correction: the bridge inverse less the thermal output in
-     * one loop, which reads each temperature at the output's own index (copied into dst first
-     * when the offsets differ, since C2 does not vectorise two double arrays read and written at
-     * different unknown offsets). Without a drifting gauge factor, only a temperature that is
-     * not finite (the loop reports it) leads to a count, after those samples are set to NaN as
-     * the scalar path sets them.
+     * A chunk with the thermal correction, converted in one loop (the bridge inverse less the
+     * thermal output) that reads each temperature at the output's own index (copied into dst
+     * first when the offsets differ, since C2 does not vectorise two double arrays read and
+     * written at different unknown offsets) and takes the codes' least and greatest. Returns
+     * −1 if a code lay outside the proven codes (the caller redoes the chunk by the checked
+     * path; the temperatures are read from {@code celsius}, which is disjoint from dst), else
+     * the count of NaN outputs. Without a drifting gauge factor, only a temperature that is not
+     * finite (the loop reports it) leads to a count, after those samples are set to NaN as the
+     * scalar path sets them.
      */
     private int provenWithThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
             double[] dst, int start, int stop) {
@@ -480,8 +504,12 @@ public final class StrainChannel {
             System.arraycopy(celsius, start + celsiusShift, dst, start, stop - start);
             t = dst;
         }
-        boolean finite = bridge.codesToStrainLessThermal(codes, shift, scale, offset, t, dst,
-                start, stop, factor, thermal);
+        int status = bridge.codesToStrainLessThermal(codes, shift, scale, offset, t, dst,
+                start, stop, factor, thermal, provenLow, provenHigh);
+        if (status == Bridge.CODES_OUTSIDE) {
+            return -1;
+        }
+        boolean finite = status == Bridge.PROVEN;
         if (drift != 0.0) {
             gaugeFactorInPlace(dst, celsius, celsiusShift, start, stop);
         }

@@ -3,6 +3,7 @@ package org.strainmath.bridge;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import java.util.Arrays;
 import java.util.SplittableRandom;
 import java.util.function.DoubleUnaryOperator;
 
@@ -73,6 +74,34 @@ class BridgeKernelTest {
         double[] src = inputs(new SplittableRandom(11), 0.02, 3.0);
         assertThat(assertBlockIsScalar(src, bridge::toStrain, bridge::toStrain))
                 .isGreaterThan(LENGTH / 10);
+    }
+
+    /**
+     * Both ways of counting (a min reduction in the loop, chosen on JDK 25, and a pass after it)
+     * on every JDK: chunks of clean readings, where the probe alone proves the count 0, and
+     * chunks with one NaN, one infinity or one impossible reading at a seeded place.
+     */
+    @ParameterizedTest
+    @EnumSource(Arrangement.class)
+    void bothWaysOfCountingGiveTheScalarInverseAndItsCount(Arrangement arrangement) {
+        Bridge bridge = arrangement.build(StrainGauge.ofOhms(350, 2.1), 0.3);
+        SplittableRandom random = new SplittableRandom(17);
+        double[] src = new double[4 * 2048 + 100];
+        for (int i = 0; i < src.length; i++) {
+            src[i] = bridge.toRatio(random.nextDouble(-3e-3, 3e-3));
+        }
+        src[2048 + random.nextInt(2048)] = Double.NaN;
+        src[2 * 2048 + random.nextInt(2048)] = Double.POSITIVE_INFINITY;
+        src[3 * 2048 + random.nextInt(2048)] = 3.0;
+        for (boolean probeInLoop : new boolean[] {true, false}) {
+            assertThat(assertBlockIsScalar(src,
+                    (a, ao, b, bo, n) -> bridge.toStrain(a, ao, b, bo, n, probeInLoop),
+                    bridge::toStrain)).as("probe in loop: %s", probeInLoop).isEqualTo(3);
+            double[] clean = Arrays.copyOf(src, 2048);
+            assertThat(assertBlockIsScalar(clean,
+                    (a, ao, b, bo, n) -> bridge.toStrain(a, ao, b, bo, n, probeInLoop),
+                    bridge::toStrain)).isZero();
+        }
     }
 
     @ParameterizedTest

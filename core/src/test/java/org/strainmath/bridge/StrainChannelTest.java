@@ -129,10 +129,10 @@ class StrainChannelTest {
             expectedNaN += Double.isNaN(expected[i]) ? 1 : 0;
         }
         assertThat(expectedNaN).isPositive();
-        for (boolean mayProve : new boolean[] {true, false}) {
+        for (StrainChannel.Proof proof : StrainChannel.Proof.values()) {
             double[] out = new double[n + 2];
-            int nan = channel.convert(codes, 5, null, 0, out, 2, n, mayProve);
-            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("may prove: %s", mayProve)
+            int nan = channel.convert(codes, 5, null, 0, out, 2, n, proof);
+            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("proof: %s", proof)
                     .isEqualTo(expected);
             assertThat(nan).isEqualTo(expectedNaN);
         }
@@ -196,10 +196,10 @@ class StrainChannelTest {
             expectedNaN += Double.isNaN(expected[i]) ? 1 : 0;
         }
         assertThat(expectedNaN).isGreaterThanOrEqualTo(4);
-        for (boolean mayProve : new boolean[] {true, false}) {
+        for (StrainChannel.Proof proof : StrainChannel.Proof.values()) {
             double[] out = new double[n + 2];
-            int nan = channel.convert(codes, 0, celsius, celsiusOff, out, 2, n, mayProve);
-            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("may prove: %s", mayProve)
+            int nan = channel.convert(codes, 0, celsius, celsiusOff, out, 2, n, proof);
+            assertThat(java.util.Arrays.copyOfRange(out, 2, n + 2)).as("proof: %s", proof)
                     .isEqualTo(expected);
             assertThat(nan).isEqualTo(expectedNaN);
         }
@@ -424,8 +424,8 @@ class StrainChannelTest {
     }
 
     @org.junit.jupiter.params.ParameterizedTest
-    @org.junit.jupiter.params.provider.ValueSource(booleans = {true, false})
-    void aSpanCorrectionScalesTheBridgeStrainBeforeTheThermalCorrection(boolean mayProve) {
+    @org.junit.jupiter.params.provider.EnumSource(StrainChannel.Proof.class)
+    void aSpanCorrectionScalesTheBridgeStrainBeforeTheThermalCorrection(StrainChannel.Proof proof) {
         // Definition (common practice, no source): the corrected strain is factor × the strain
         // the channel gave, before thermal output is subtracted; both kernel paths agree.
         ThermalOutput curve = ThermalOutput.ofCelsius(-30, 2.1, -0.045);
@@ -449,7 +449,7 @@ class StrainChannelTest {
                 .isCloseTo(plain.toStrain(900_000) * 1.02 - thermal, within(1e-15));
         int[] codes = {-400_000, 50_000, 2_000_000, 900_000};
         double[] out = new double[4];
-        spanned.convert(codes, 0, null, 0, out, 0, 4, mayProve);
+        spanned.convert(codes, 0, null, 0, out, 0, 4, proof);
         for (int i = 0; i < 4; i++) {
             assertThat(out[i]).isEqualTo(spanned.toStrain(codes[i]));
         }
