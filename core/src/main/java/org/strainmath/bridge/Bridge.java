@@ -959,7 +959,7 @@ public final class Bridge {
         for (int done = 0; done < len; done += Kernels.CHUNK) {
             int start = dstOff + done;
             int stop = start + Math.min(Kernels.CHUNK, len - done);
-            if (probeInLoop) {
+            if (probeInLoop && stop - start >= Kernels.REDUCTION_MIN_LENGTH) {
                 double probe = toStrainProbed(from, dst, start, stop, ratioLow, ratioHigh);
                 nan += probe == 0 ? 0 : Kernels.countNaN(dst, start, stop - start);
             } else {
@@ -1109,6 +1109,28 @@ public final class Bridge {
         }
     }
 
+    /**
+     * As {@link #codesToStrainPlain}, less the thermal output of the temperature of each sample,
+     * t = celsius[i] (which may be dst itself: each t is read before dst[i] is written), in one
+     * loop: plain(code·scale + offset)·factor − q(t). Returns whether every t was finite; if
+     * so, the results equal {@code thermal.correct(plain·factor, t)} bit for bit.
+     */
+    boolean codesToStrainLessThermal(int[] codes, int shift, double scale, double offset,
+            double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        switch (form) {
+            case LINEAR:
+                return codesLinearLessThermal(codes, shift, scale, offset, celsius, dst, start,
+                        end, factor, thermal);
+            case FIRST_DEGREE:
+                return codesFirstDegreeLessThermal(codes, shift, scale, offset, celsius, dst,
+                        start, end, factor, thermal);
+            default:
+                return codesQuadraticLessThermal(codes, shift, scale, offset, celsius, dst, start,
+                        end, factor, thermal);
+        }
+    }
+
     /** What a fused thermal loop found: its codes outside the given bounds (the chunk must be redone). */
     static final int CODES_OUTSIDE = 0;
     /** What a fused thermal loop found: codes within the bounds, every temperature finite. */
@@ -1117,27 +1139,25 @@ public final class Bridge {
     static final int PROVEN_NON_FINITE_TEMPERATURE = 2;
 
     /**
-     * As {@link #codesToStrainPlain}, less the thermal output of the temperature of each sample,
-     * t = celsius[i] (which may be dst itself: each t is read before dst[i] is written), in one
-     * loop: plain(code·scale + offset)·factor − q(t). The loop also takes the least and greatest
-     * code and ANDs {@link Kernels#finiteBit} over the temperatures (C2 keeps it vectorised on
-     * JDK 17 and 25): {@link #CODES_OUTSIDE} if a code lies outside [low, high] (the outputs are
+     * As {@link #codesToStrainLessThermal}, for codes not yet proven: the loop also takes the
+     * least and greatest code ({@link Kernels#REDUCTIONS_IN_LOOP}; on JDK 17 this loop ran at
+     * 0.67 × the proof pass and the loop without them): {@link #CODES_OUTSIDE} if a code lies outside [low, high] (the outputs are
      * then to be recomputed by the checked path), else {@link #PROVEN} or
      * {@link #PROVEN_NON_FINITE_TEMPERATURE}. For {@link #PROVEN}, the results equal
      * {@code thermal.correct(plain·factor, t)} bit for bit.
      */
-    int codesToStrainLessThermal(int[] codes, int shift, double scale, double offset,
+    int codesToStrainLessThermalWithin(int[] codes, int shift, double scale, double offset,
             double[] celsius, double[] dst, int start, int end, double factor,
             ThermalOutput.Correction thermal, int low, int high) {
         switch (form) {
             case LINEAR:
-                return codesLinearLessThermal(codes, shift, scale, offset, celsius, dst, start,
+                return codesLinearLessThermalWithin(codes, shift, scale, offset, celsius, dst, start,
                         end, factor, thermal, low, high);
             case FIRST_DEGREE:
-                return codesFirstDegreeLessThermal(codes, shift, scale, offset, celsius, dst,
+                return codesFirstDegreeLessThermalWithin(codes, shift, scale, offset, celsius, dst,
                         start, end, factor, thermal, low, high);
             default:
-                return codesQuadraticLessThermal(codes, shift, scale, offset, celsius, dst, start,
+                return codesQuadraticLessThermalWithin(codes, shift, scale, offset, celsius, dst, start,
                         end, factor, thermal, low, high);
         }
     }
@@ -1369,7 +1389,72 @@ public final class Bridge {
     // The thermal output q(t) is ThermalOutput.Correction.polynomial, the expression that the
     // scalar path evaluates too, so that both give the same bits.
 
-    private int codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
+    private boolean codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
+            double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double p0 = thermal.coefficient(0);
+        final double p1 = thermal.coefficient(1);
+        final double p2 = thermal.coefficient(2);
+        final double p3 = thermal.coefficient(3);
+        final double p4 = thermal.coefficient(4);
+        int finite = 1;
+        for (int i = start; i < end; i++) {
+            double t = celsius[i];
+            finite &= Kernels.finiteBit(t);
+            dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor
+                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
+        }
+        return finite == 1;
+    }
+
+    private boolean codesFirstDegreeLessThermal(int[] codes, int shift, double scale,
+            double offset, double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double e1 = d1;
+        final double p0 = thermal.coefficient(0);
+        final double p1 = thermal.coefficient(1);
+        final double p2 = thermal.coefficient(2);
+        final double p3 = thermal.coefficient(3);
+        final double p4 = thermal.coefficient(4);
+        int finite = 1;
+        for (int i = start; i < end; i++) {
+            double t = celsius[i];
+            finite &= Kernels.finiteBit(t);
+            dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor
+                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
+        }
+        return finite == 1;
+    }
+
+    private boolean codesQuadraticLessThermal(int[] codes, int shift, double scale,
+            double offset, double[] celsius, double[] dst, int start, int end, double factor,
+            ThermalOutput.Correction thermal) {
+        final double c0 = n0;
+        final double c1 = n1;
+        final double c2 = n2;
+        final double e1 = d1;
+        final double e2 = d2;
+        final double sign = rootSign;
+        final double p0 = thermal.coefficient(0);
+        final double p1 = thermal.coefficient(1);
+        final double p2 = thermal.coefficient(2);
+        final double p3 = thermal.coefficient(3);
+        final double p4 = thermal.coefficient(4);
+        int finite = 1;
+        for (int i = start; i < end; i++) {
+            double t = celsius[i];
+            finite &= Kernels.finiteBit(t);
+            dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
+                    * factor - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
+        }
+        return finite == 1;
+    }
+
+    private int codesLinearLessThermalWithin(int[] codes, int shift, double scale, double offset,
             double[] celsius, double[] dst, int start, int end, double factor,
             ThermalOutput.Correction thermal, int low, int high) {
         final double c0 = n0;
@@ -1394,7 +1479,7 @@ public final class Bridge {
         return thermalStatus(min, max, low, high, finite);
     }
 
-    private int codesFirstDegreeLessThermal(int[] codes, int shift, double scale,
+    private int codesFirstDegreeLessThermalWithin(int[] codes, int shift, double scale,
             double offset, double[] celsius, double[] dst, int start, int end, double factor,
             ThermalOutput.Correction thermal, int low, int high) {
         final double c0 = n0;
@@ -1420,7 +1505,7 @@ public final class Bridge {
         return thermalStatus(min, max, low, high, finite);
     }
 
-    private int codesQuadraticLessThermal(int[] codes, int shift, double scale,
+    private int codesQuadraticLessThermalWithin(int[] codes, int shift, double scale,
             double offset, double[] celsius, double[] dst, int start, int end, double factor,
             ThermalOutput.Correction thermal, int low, int high) {
         final double c0 = n0;

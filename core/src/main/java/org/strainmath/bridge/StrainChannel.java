@@ -449,8 +449,8 @@ public final class StrainChannel {
      * readings, the checked inverse and a count of the NaN it gave. {@code proof} says how the
      * least and greatest are found: by a pass before the loop, or by the loop itself, which
      * then hands a chunk with a code outside to the checked path, which overwrites what the
-     * loop wrote (see {@link Kernels#REDUCTIONS_IN_LOOP}; the thermal loop always takes them
-     * itself). All give the same bits; the tests compare every one with the scalar path.
+     * loop wrote (see {@link Kernels#REDUCTIONS_IN_LOOP}). All give the same bits; the tests
+     * compare every one with the scalar path.
      */
     int convert(int[] codes, int codesOff, double[] celsius, int celsiusOff, double[] dst,
             int dstOff, int len, Proof proof) {
@@ -464,16 +464,24 @@ public final class StrainChannel {
             boolean converted;
             if (proof == Proof.NONE) {
                 converted = false;
-            } else if (withThermal) {
-                int counted = provenWithThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
-                        start, stop);
-                converted = counted >= 0;
-                nan += Math.max(counted, 0);
             } else if (proof == Proof.IN_LOOP) {
-                converted = bridge.codesToStrainPlainWithin(codes, shift, scale, offset, dst,
-                        start, stop, factor, provenLow, provenHigh);
+                if (withThermal) {
+                    int counted = withThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
+                            start, stop, true);
+                    converted = counted >= 0;
+                    nan += Math.max(counted, 0);
+                } else {
+                    converted = bridge.codesToStrainPlainWithin(codes, shift, scale, offset,
+                            dst, start, stop, factor, provenLow, provenHigh);
+                }
             } else if (proven(codes, start + shift, stop + shift)) {
-                bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop, factor);
+                if (withThermal) {
+                    nan += withThermal(codes, shift, celsius, celsiusOff - dstOff, dst, start,
+                            stop, false);
+                } else {
+                    bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop,
+                            factor);
+                }
                 converted = true;
             } else {
                 converted = false;
@@ -490,24 +498,31 @@ public final class StrainChannel {
      * A chunk with the thermal correction, converted in one loop (the bridge inverse less the
      * thermal output) that reads each temperature at the output's own index (copied into dst
      * first when the offsets differ, since C2 does not vectorise two double arrays read and
-     * written at different unknown offsets) and takes the codes' least and greatest. Returns
-     * −1 if a code lay outside the proven codes (the caller redoes the chunk by the checked
-     * path; the temperatures are read from {@code celsius}, which is disjoint from dst), else
-     * the count of NaN outputs. Without a drifting gauge factor, only a temperature that is not
-     * finite (the loop reports it) leads to a count, after those samples are set to NaN as the
-     * scalar path sets them.
+     * written at different unknown offsets). With {@code boundsInLoop} the loop also takes the
+     * codes' least and greatest and this returns −1 if one lay outside the proven codes (the
+     * caller redoes the chunk by the checked path; the temperatures are read from
+     * {@code celsius}, which is disjoint from dst); without, the caller has proven the codes.
+     * Otherwise it returns the count of NaN outputs. Without a drifting gauge factor, only a
+     * temperature that is not finite (the loop reports it) leads to a count, after those
+     * samples are set to NaN as the scalar path sets them.
      */
-    private int provenWithThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
-            double[] dst, int start, int stop) {
+    private int withThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
+            double[] dst, int start, int stop, boolean boundsInLoop) {
         double[] t = celsius;
         if (celsiusShift != 0) {
             System.arraycopy(celsius, start + celsiusShift, dst, start, stop - start);
             t = dst;
         }
-        int status = bridge.codesToStrainLessThermal(codes, shift, scale, offset, t, dst,
-                start, stop, factor, thermal, provenLow, provenHigh);
-        if (status == Bridge.CODES_OUTSIDE) {
-            return -1;
+        int status;
+        if (boundsInLoop) {
+            status = bridge.codesToStrainLessThermalWithin(codes, shift, scale, offset, t, dst,
+                    start, stop, factor, thermal, provenLow, provenHigh);
+            if (status == Bridge.CODES_OUTSIDE) {
+                return -1;
+            }
+        } else {
+            status = bridge.codesToStrainLessThermal(codes, shift, scale, offset, t, dst, start,
+                    stop, factor, thermal) ? Bridge.PROVEN : Bridge.PROVEN_NON_FINITE_TEMPERATURE;
         }
         boolean finite = status == Bridge.PROVEN;
         if (drift != 0.0) {

@@ -31,6 +31,14 @@ public final class Kernels {
      */
     public static final boolean REDUCTIONS_IN_LOOP = Runtime.version().feature() >= 25;
 
+    /**
+     * The shortest chunk of {@code double} samples that takes the loop with the reduction
+     * where {@link #REDUCTIONS_IN_LOOP} allows it; shorter ones take the separate probe. On
+     * JDK 25 the bridge inverse with the running min ran at 0.42 to 0.52 × its floor on blocks
+     * of 64 samples (against 0.85 to 1.15 × with the separate probe), and at 1.02 × on 4096.
+     */
+    public static final int REDUCTION_MIN_LENGTH = 512;
+
     private Kernels() {
     }
 
