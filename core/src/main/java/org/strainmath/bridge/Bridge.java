@@ -1131,7 +1131,7 @@ public final class Bridge {
         }
     }
 
-    /** What a fused thermal loop found: its codes outside the given bounds (the chunk must be redone). */
+    /** What a fused thermal loop found: a code outside the bounds (the chunk is to be redone). */
     static final int CODES_OUTSIDE = 0;
     /** What a fused thermal loop found: codes within the bounds, every temperature finite. */
     static final int PROVEN = 1;
@@ -1141,24 +1141,24 @@ public final class Bridge {
     /**
      * As {@link #codesToStrainLessThermal}, for codes not yet proven: the loop also takes the
      * least and greatest code ({@link Kernels#REDUCTIONS_IN_LOOP}; on JDK 17 this loop ran at
-     * 0.67 × the proof pass and the loop without them): {@link #CODES_OUTSIDE} if a code lies outside [low, high] (the outputs are
-     * then to be recomputed by the checked path), else {@link #PROVEN} or
-     * {@link #PROVEN_NON_FINITE_TEMPERATURE}. For {@link #PROVEN}, the results equal
-     * {@code thermal.correct(plain·factor, t)} bit for bit.
+     * 0.67 × the proof pass and the loop without them). Returns {@link #CODES_OUTSIDE} if a
+     * code lies outside [low, high] (the outputs are then to be recomputed by the checked
+     * path), else {@link #PROVEN} or {@link #PROVEN_NON_FINITE_TEMPERATURE}. For
+     * {@link #PROVEN}, the results equal {@code thermal.correct(plain·factor, t)} bit for bit.
      */
     int codesToStrainLessThermalWithin(int[] codes, int shift, double scale, double offset,
             double[] celsius, double[] dst, int start, int end, double factor,
             ThermalOutput.Correction thermal, int low, int high) {
         switch (form) {
             case LINEAR:
-                return codesLinearLessThermalWithin(codes, shift, scale, offset, celsius, dst, start,
-                        end, factor, thermal, low, high);
+                return codesLinearLessThermalWithin(codes, shift, scale, offset, celsius, dst,
+                        start, end, factor, thermal, low, high);
             case FIRST_DEGREE:
                 return codesFirstDegreeLessThermalWithin(codes, shift, scale, offset, celsius, dst,
                         start, end, factor, thermal, low, high);
             default:
-                return codesQuadraticLessThermalWithin(codes, shift, scale, offset, celsius, dst, start,
-                        end, factor, thermal, low, high);
+                return codesQuadraticLessThermalWithin(codes, shift, scale, offset, celsius,
+                        dst, start, end, factor, thermal, low, high);
         }
     }
 

@@ -466,8 +466,8 @@ public final class StrainChannel {
                 converted = false;
             } else if (proof == Proof.IN_LOOP) {
                 if (withThermal) {
-                    int counted = withThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
-                            start, stop, true);
+                    int counted = fusedWithThermal(codes, shift, celsius, celsiusOff - dstOff,
+                            dst, start, stop, true);
                     converted = counted >= 0;
                     nan += Math.max(counted, 0);
                 } else {
@@ -476,8 +476,8 @@ public final class StrainChannel {
                 }
             } else if (proven(codes, start + shift, stop + shift)) {
                 if (withThermal) {
-                    nan += withThermal(codes, shift, celsius, celsiusOff - dstOff, dst, start,
-                            stop, false);
+                    nan += fusedWithThermal(codes, shift, celsius, celsiusOff - dstOff, dst,
+                            start, stop, false);
                 } else {
                     bridge.codesToStrainPlain(codes, shift, scale, offset, dst, start, stop,
                             factor);
@@ -506,7 +506,7 @@ public final class StrainChannel {
      * temperature that is not finite (the loop reports it) leads to a count, after those
      * samples are set to NaN as the scalar path sets them.
      */
-    private int withThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
+    private int fusedWithThermal(int[] codes, int shift, double[] celsius, int celsiusShift,
             double[] dst, int start, int stop, boolean boundsInLoop) {
         double[] t = celsius;
         if (celsiusShift != 0) {
