@@ -18,15 +18,16 @@ public final class Kernels {
      * max) in place of a pass of its own over the block: true on JDK 25 and later, whose C2
      * keeps such a loop vectorised and reduces once after it; false before, since JDK 17's C2
      * reduces the vector inside every iteration. Measured with JMH on this project's machines
-     * (2026-12-02): the bridge inverse with {@code probe = Math.min(probe, ε·0)} in its loop (0
-     * when every output is finite, NaN otherwise) ran at 0.92 to 1.00 × its floor on JDK 25,
-     * against 0.71 to 0.74 × with the NaN probe as a pass of its own; the channel with the
-     * codes' least and greatest taken in its loop at 0.89 to 1.05 × its floor, against 0.59 to
-     * 0.78 × with the proof pass before it. On JDK 17 the same forms were slower than the
-     * separate passes: a division loop with the min at 0.39 × its floor (0.66 × with the pass),
-     * the channel at 0.27 × its proof-pass form. Not used where it was measured slower on JDK 25 too (the
-     * rosette's von Mises loop, 0.78 → 0.59 × its floor; plane stress). JDK 18 to 24 were not
-     * measured and take the separate passes. Both ways give the same outputs and counts; the
+     * (2026-12-02, side by side, 4096 samples, two forks): the bridge inverse with
+     * {@code probe = Math.min(probe, ε·0)} in its loop (0 when every output is finite, NaN
+     * otherwise) ran at 0.92 to 1.00 × its floor on JDK 25, against 0.71 to 0.74 × with the NaN
+     * probe as a pass of its own; the channel with the codes' least and greatest taken in its
+     * loop at 0.89 to 1.05 × its floor, against 0.56 to 0.78 × with the proof pass before it.
+     * On JDK 17 the same forms were slower than the separate passes: a division loop with the
+     * min at 0.39 × its floor (0.66 × with the pass), the channel at 0.27 × its proof-pass form.
+     * Not used where it was measured slower on JDK 25 too (the rosette's von Mises loop, 0.78 →
+     * 0.59 × its floor; plane stress). JDK 18 to 24 were not measured and take the separate
+     * passes. Both ways give the same outputs and counts; the
      * tests run both on every JDK.
      */
     public static final boolean REDUCTIONS_IN_LOOP = Runtime.version().feature() >= 25;
