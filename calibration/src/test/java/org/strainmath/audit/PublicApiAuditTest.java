@@ -47,6 +47,23 @@ import org.strainmath.calibration.ResistorSeries;
 import org.strainmath.calibration.ShuntCalibration;
 import org.strainmath.calibration.ShuntPosition;
 import org.strainmath.calibration.TransducerCalibration;
+import org.strainmath.fatigue.DamageSum;
+import org.strainmath.fatigue.FatigueLife;
+import org.strainmath.fatigue.MeanStressCorrection;
+import org.strainmath.fatigue.SnCurve;
+import org.strainmath.fatigue.StrainLife;
+import org.strainmath.fatigue.StressLife;
+import org.strainmath.history.Bins;
+import org.strainmath.history.CycleConsumer;
+import org.strainmath.history.Cycles;
+import org.strainmath.history.FromToMatrix;
+import org.strainmath.history.LevelCrossings;
+import org.strainmath.history.Rainflow;
+import org.strainmath.history.RainflowCounter;
+import org.strainmath.history.RangeHistogram;
+import org.strainmath.history.RangeMeanMatrix;
+import org.strainmath.history.TurningPointFilter;
+import org.strainmath.history.TurningPoints;
 import org.strainmath.material.ElasticConstant;
 import org.strainmath.material.IsotropicMaterial;
 import org.strainmath.material.OrthotropicLamina;
@@ -200,6 +217,56 @@ class PublicApiAuditTest {
         sample(RosetteStrains.class, () -> Rosette.rectangular().reduceMicrostrain(500, 200, -100));
         sample(RosetteStresses.class, () -> Rosette.rectangular().withMaterial(STEEL)
                 .stressesOfMicrostrain(500, 200, -100));
+        // Histories and fatigue
+        double[] history = {0, 3, -2, 4, -1, 2, -3, 1};
+        StressLife life = StressLife.of(SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3));
+        sample(long[].class, () -> new long[16]);
+        sample(Rainflow.class, Rainflow::astm, () -> Rainflow.astm().withGate(0.5));
+        sample(CycleConsumer.class, () -> (CycleConsumer) (f, t, c) -> { });
+        sample(RainflowCounter.class, () -> {
+            RainflowCounter c = Rainflow.astm().newCounter((f, t, n) -> { });
+            c.accept(history, 0, history.length);
+            return c;
+        });
+        sample(TurningPointFilter.class, () -> TurningPointFilter.withGate(0));
+        sample(Cycles.class, () -> Rainflow.astm().count(history));
+        sample(Bins.class, () -> Bins.uniform(0, 10, 10), () -> Bins.uniform(-10, 10, 10));
+        sample(RangeHistogram.class, () -> RangeHistogram.of(Bins.uniform(0, 10, 10)));
+        sample(RangeMeanMatrix.class, () -> RangeMeanMatrix.of(Bins.uniform(0, 10, 10),
+                Bins.uniform(-10, 10, 10)));
+        sample(FromToMatrix.class, () -> FromToMatrix.of(Bins.uniform(-10, 10, 10)));
+        sample(LevelCrossings.class, () -> LevelCrossings.of(-1, 0, 1));
+        sample(SnCurve.class, () -> SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3));
+        sample(MeanStressCorrection.class, MeanStressCorrection::none,
+                () -> MeanStressCorrection.goodman(Stress.ofMegapascals(400)));
+        sample(StressLife.class, () -> life);
+        sample(FatigueLife.class, () -> life);
+        sample(StrainLife.class, () -> StrainLife.of(Stress.ofGigapascals(200),
+                Stress.ofMegapascals(1700), -0.09, 0.6, -0.6));
+        sample(DamageSum.class, () -> DamageSum.of(life));
+        sample(TurningPoints.class, () -> TurningPoints.of(history));
+        CycleConsumer none = (f, t, c) -> { };
+        baseline("RainflowCounter.fromBytes(byte[],CycleConsumer)", () -> new Object[] {null,
+            ((RainflowCounter) sampleOf(RainflowCounter.class, 0)).toBytes(), none});
+        baseline("DamageSum.fromBytes(FatigueLife,byte[])", () -> new Object[] {null, life,
+            DamageSum.of(life).toBytes()});
+        baseline("RangeHistogram.fromBytes(byte[])", () -> new Object[] {null,
+            RangeHistogram.of(Bins.uniform(0, 10, 10)).toBytes()});
+        baseline("RangeMeanMatrix.fromBytes(byte[])", () -> new Object[] {null,
+            ((RangeMeanMatrix) sampleOf(RangeMeanMatrix.class, 0)).toBytes()});
+        baseline("FromToMatrix.fromBytes(byte[])", () -> new Object[] {null,
+            ((FromToMatrix) sampleOf(FromToMatrix.class, 0)).toBytes()});
+        baseline("LevelCrossings.fromBytes(byte[])", () -> new Object[] {null,
+            ((LevelCrossings) sampleOf(LevelCrossings.class, 0)).toBytes()});
+        baseline("RangeHistogram.equivalentRange(double)", () -> {
+            RangeHistogram h = RangeHistogram.of(Bins.uniform(0, 10, 10));
+            h.accept(0, 3, 1);
+            return new Object[] {h, 3.0};
+        });
+        baseline("SnCurve.ofBasquin(Stress,double)", () -> new Object[] {null,
+            Stress.ofMegapascals(1000), -0.1});
+        baseline("StrainLife.of(Stress,Stress,double,double,double)", () -> new Object[] {null,
+            Stress.ofGigapascals(200), Stress.ofMegapascals(1700), -0.09, 0.6, -0.6});
 
         baseline("Bridge.of(BridgeArm,BridgeArm,BridgeArm,BridgeArm)", () -> new Object[] {null,
             BridgeArm.active(gauge, 1.0), BridgeArm.completion(Resistance.ofOhms(350)),
@@ -263,6 +330,22 @@ class PublicApiAuditTest {
                 allow(record[0] + "#" + record[k] + ":NaN", "a result record");
                 allow(record[0] + "#" + record[k] + ":infinite", "a result record");
             }
+        }
+        allow("Bins.indexOf(double)#x:NaN", "documented: -1, outside the bins");
+        allow("Bins.indexOf(double)#x:infinite", "documented: -1, outside the bins");
+        for (String consumer : new String[] {"CycleConsumer", "DamageSum", "FromToMatrix",
+            "LevelCrossings", "RangeHistogram", "RangeMeanMatrix"}) {
+            for (String argument : new String[] {"from", "to", "count"}) {
+                for (String bad : new String[] {"NaN", "infinite"}) {
+                    allow(consumer + ".accept(double,double,double)#" + argument + ":" + bad,
+                            "the per-cycle path of a count, fed finite cycles by the counter;"
+                            + " documented never to throw");
+                }
+            }
+        }
+        for (String stream : new String[] {"RainflowCounter", "TurningPointFilter"}) {
+            allow(stream + ".accept(double)#sample:NaN", "documented: skipped and counted");
+            allow(stream + ".accept(double)#sample:infinite", "documented: skipped and counted");
         }
         baseline("UncertaintyBudget.withSensitivities(double[])", () -> new Object[] {
             sampleOf(UncertaintyBudget.class, 0), new double[] {2.0, 1.0}});

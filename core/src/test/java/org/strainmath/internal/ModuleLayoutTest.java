@@ -17,7 +17,7 @@ class ModuleLayoutTest {
         assertThat(descriptor.exports()).filteredOn(e -> !e.isQualified())
                 .extracting(ModuleDescriptor.Exports::source)
                 .containsExactlyInAnyOrder("org.strainmath.quantity", "org.strainmath.bridge",
-                        "org.strainmath.material");
+                        "org.strainmath.material", "org.strainmath.history", "org.strainmath.fatigue");
         // The internals go to the library's own modules only.
         assertThat(descriptor.exports()).filteredOn(ModuleDescriptor.Exports::isQualified)
                 .singleElement().satisfies(e -> {
