@@ -25,11 +25,14 @@ public final class Bins {
     /** For uniform bins: low edge and width, used to find a bin without a search; else NaN. */
     private final double low;
     private final double width;
+    /** 1/width, so that a lookup multiplies rather than divides. */
+    private final double perWidth;
 
     private Bins(double[] edges, double low, double width) {
         this.edges = edges;
         this.low = low;
         this.width = width;
+        this.perWidth = 1 / width;
     }
 
     /**
@@ -137,7 +140,7 @@ public final class Bins {
         }
         int i;
         if (width == width) {
-            i = (int) ((x - low) / width);
+            i = (int) ((x - low) * perWidth);
             i = Math.max(0, Math.min(last - 1, i));
             while (i > 0 && x < edges[i]) {
                 i--;

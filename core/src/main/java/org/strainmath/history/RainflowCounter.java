@@ -49,6 +49,13 @@ public final class RainflowCounter {
     private final boolean threePoint;
     private final CycleConsumer consumer;
     private final Reversals reversals;
+    /** A one-sample block for {@link #accept(double)}, so that both share the block loop. */
+    private final double[] one = new double[1];
+    /**
+     * The turning points of a stretch of a block (at most one per sample), pushed after the
+     * detector's loop: 8 KiB, so that a block of 4096 samples takes four stretches.
+     */
+    private final double[] turning = new double[1024];
     /** The detector of the repeated residue's round, reused. */
     private final Reversals round;
     /** The residue: stack[base, top), oldest first. base > 0 only in the three-point form. */
@@ -76,13 +83,8 @@ public final class RainflowCounter {
      * allocation-free in steady state.
      */
     public void accept(double sample) {
-        if (sample - sample != 0) {
-            skipped++;
-            return;
-        }
-        if (reversals.offer(sample, samples++)) {
-            push(reversals.confirmed, consumer);
-        }
+        one[0] = sample;
+        accept(one, 0, 1);
     }
 
     /**
@@ -98,17 +100,16 @@ public final class RainflowCounter {
         Objects.requireNonNull(src, "src");
         Objects.checkFromIndexSize(srcOff, len, src.length);
         Reversals r = reversals;
-        long n = samples;
-        int bad = 0;
-        for (int i = srcOff, end = srcOff + len; i < end; i++) {
-            double x = src[i];
-            if (x - x != 0) {
-                bad++;
-            } else if (r.offer(x, n++)) {
-                push(r.confirmed, consumer);
+        double[] found = turning;
+        int end = srcOff + len;
+        for (int i = srcOff; i < end; i += found.length) {
+            r.scan(src, i, Math.min(end, i + found.length), 0, found, null, 0);
+            for (int k = 0, n = r.written; k < n; k++) {
+                push(found[k], consumer);
             }
         }
-        samples = n;
+        int bad = r.takeSkipped();
+        samples += len - bad;
         skipped += bad;
         return bad;
     }
@@ -175,10 +176,13 @@ public final class RainflowCounter {
         }
         round.reset();
         int m = 0;
+        double[] period = one;
+        double[] found = turning;
         for (int j = 0; j <= n; j++) {
-            double x = stack[base + (k - base + j) % n];
-            if (round.offer(x, j)) {
-                m = pushFull(ring, m, round.confirmed, out);
+            period[0] = stack[base + (k - base + j) % n];
+            round.scan(period, 0, 1, 0, found, null, 0);
+            if (round.written == 1) {
+                m = pushFull(ring, m, found[0], out);
             }
         }
         if (round.hasPending()) {

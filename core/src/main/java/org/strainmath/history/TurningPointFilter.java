@@ -38,6 +38,9 @@ import org.strainmath.internal.Format;
 public final class TurningPointFilter {
 
     private final Reversals reversals;
+    /** A one-sample block for {@link #accept(double)}, so that both share the block loop. */
+    private final double[] one = new double[1];
+    private final double[] spare = new double[1];
     private long offered;
     private long skipped;
 
@@ -59,12 +62,8 @@ public final class TurningPointFilter {
      * and {@link #lastPosition()} then give. A sample that is not finite is skipped.
      */
     public boolean accept(double sample) {
-        long position = offered++;
-        if (sample - sample != 0) {
-            skipped++;
-            return false;
-        }
-        return reversals.offer(sample, position);
+        one[0] = sample;
+        return run(one, 0, spare, null, 0, 1) == 1;
     }
 
     /**
@@ -103,24 +102,10 @@ public final class TurningPointFilter {
     private int run(double[] src, int srcOff, double[] dst, long[] positions, int dstOff,
             int len) {
         Reversals r = reversals;
-        long position = offered;
-        int bad = 0;
-        int out = dstOff;
-        for (int i = srcOff, end = srcOff + len; i < end; i++, position++) {
-            double x = src[i];
-            if (x - x != 0) {
-                bad++;
-            } else if (r.offer(x, position)) {
-                dst[out] = r.confirmed;
-                if (positions != null) {
-                    positions[out] = r.confirmedPosition;
-                }
-                out++;
-            }
-        }
-        offered = position;
-        skipped += bad;
-        return out - dstOff;
+        r.scan(src, srcOff, srcOff + len, offered - srcOff, dst, positions, dstOff);
+        offered += len;
+        skipped += r.takeSkipped();
+        return r.written;
     }
 
     /** The last turning point confirmed, or NaN before the first sample. */
