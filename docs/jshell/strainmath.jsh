@@ -3,6 +3,8 @@
 import org.strainmath.quantity.*;
 import org.strainmath.bridge.*;
 import org.strainmath.material.*;
+import org.strainmath.history.*;
+import org.strainmath.fatigue.*;
 import org.strainmath.rosette.*;
 import org.strainmath.calibration.*;
 import org.strainmath.uncertainty.*;

@@ -18,6 +18,14 @@ import org.strainmath.bridge.StrainGauge;
 import org.strainmath.bridge.ThermalOutput;
 import org.strainmath.calibration.CalibrationFit;
 import org.strainmath.calibration.FitResult;
+import org.strainmath.fatigue.DamageSum;
+import org.strainmath.fatigue.SnCurve;
+import org.strainmath.fatigue.StressLife;
+import org.strainmath.history.Bins;
+import org.strainmath.history.CycleConsumer;
+import org.strainmath.history.Rainflow;
+import org.strainmath.history.RainflowCounter;
+import org.strainmath.history.RangeHistogram;
 import org.strainmath.material.IsotropicMaterial;
 import org.strainmath.material.PlaneStrain;
 import org.strainmath.material.PlaneStress;
@@ -40,7 +48,9 @@ import org.strainmath.uncertainty.UncertaintyResult;
  * 120 Ω quarter-bridge gauge. A logger reads each bridge in mV/V at 5 V excitation. Near a
  * welded gusset a rectangular rosette of three quarter bridges on three-wire leads is read as
  * 24-bit converter codes beside a temperature channel, and the hanger's tension link (a full
- * bridge transducer) was calibrated on a reference rig before the test.
+ * bridge transducer) was calibrated on a reference rig before the test. After the proof load,
+ * a day of the rod's stress is counted as a gateway would count it, into a range histogram and
+ * a fatigue damage sum on a demo S–N curve.
  *
  * <p>All numbers here are made up for the demo; they come from no real structure. The rosette
  * codes, the temperatures and the rig readings are generated from a known truth (also made up)
@@ -123,6 +133,8 @@ public final class Demo {
         XYChart mohr = rosette(out, steel);
         out.println();
         XYChart residuals = link(out);
+        out.println();
+        day(out, rodZeroed, steel);
         out.println();
         Path figures = Path.of("target", "demo-figures");
         save(mohr, figures.resolve("gusset-mohr-circle"));
@@ -244,6 +256,87 @@ public final class Demo {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * An invented day of the hanger rod after the proof load: the logger reads the rod's bridge
+     * at 20 Hz for 24 hours, block by block as a gateway does, and a streaming rainflow counter
+     * sums the rod stress's cycles into a range histogram and a damage sum on a demo S–N curve.
+     * The stress: a dead load of 60 MPa, people crossing (more by day, each a pulse of 4 to
+     * 20 MPa over about ten seconds), a wind-driven vibration of the rod at 2.1 Hz in gusts,
+     * and 0.2 MPa of noise; three samples are dropped by the logger (NaN).
+     */
+    private static void day(PrintStream out, Bridge rod, IsotropicMaterial steel) {
+        double modulus = steel.youngsModulus().toPascals();
+        int rate = 20;
+        int blockSize = 2000;
+        int samples = 24 * 3600 * rate;
+        SplittableRandom random = new SplittableRandom(1707);
+        Bins ranges = Bins.uniform(0, 50e6, 5);
+        RangeHistogram histogram = RangeHistogram.of(ranges);
+        // invented, shaped like a design code's detail curve
+        SnCurve curve = SnCurve.ofRange(Stress.ofMegapascals(50), 2e6, 3).withKnee(5e6, 5)
+                .withCutOffAt(1e8);
+        DamageSum damage = StressLife.of(curve).newDamageSum();
+        double[] largest = {0};
+        CycleConsumer all = histogram.andThen(damage)
+                .andThen((from, to, count) -> largest[0] = Math.max(largest[0], Math.abs(to - from)));
+        RainflowCounter counter = Rainflow.astm().withGate(1e6).newCounter(all);
+        double[] block = new double[blockSize];
+        double pulse = 0;          // the stress of the crossing under way, Pa
+        int pulseLeft = 0;
+        double gust = 0;
+        int noStrain = 0;
+        for (int start = 0; start < samples; start += blockSize) {
+            for (int i = 0; i < blockSize; i++) {
+                int n = start + i;
+                double hour = n / (3600.0 * rate);
+                double busy = hour > 7 && hour < 21 ? 1.0 / (40 * rate) : 1.0 / (600 * rate);
+                if (pulseLeft == 0 && random.nextDouble() < busy) {
+                    pulse = (4 + 16 * random.nextDouble()) * 1e6;
+                    pulseLeft = 8 * rate + random.nextInt(4 * rate);
+                }
+                double crossing = pulseLeft > 0 ? pulse * Math.sin(Math.PI * pulseLeft
+                        / (12.0 * rate)) : 0;
+                pulseLeft = Math.max(0, pulseLeft - 1);
+                gust = 0.999 * gust + 0.001 * 3e6 * random.nextDouble();
+                double sigma = 60e6 + Math.max(0, crossing)
+                        + gust * Math.sin(2 * Math.PI * 2.1 * n / rate)
+                        + 0.2e6 * gaussian(random);
+                block[i] = rod.toRatio(sigma / modulus);
+            }
+            if (start == 300 * blockSize) {
+                block[10] = Double.NaN;                             // the logger dropped three
+                block[11] = Double.NaN;
+                block[12] = Double.NaN;
+            }
+            noStrain += rod.toStrain(block, 0, block, 0, blockSize);
+            for (int i = 0; i < blockSize; i++) {
+                block[i] *= modulus;                                // uniaxial: σ = E·ε
+            }
+            counter.accept(block, 0, blockSize);
+        }
+        counter.residueTo(all);                                     // the day ends
+        out.println("a day of the rod (invented): " + samples + " samples at " + rate
+                + " Hz in blocks of " + blockSize + ", " + noStrain + " without strain");
+        out.println(String.format(Locale.ROOT,
+                "  rainflow (ASTM E1049-85, gate 1 MPa): %.1f cycles, the largest of %.1f MPa",
+                histogram.total() + histogram.outside(), largest[0] / 1e6));
+        StringBuilder bins = new StringBuilder("  stress ranges:");
+        for (int i = 0; i < ranges.count(); i++) {
+            bins.append(String.format(Locale.ROOT, " %.0f-%.0f MPa %.1f%s", ranges.edge(i) / 1e6,
+                    ranges.edge(i + 1) / 1e6, histogram.count(i),
+                    i + 1 < ranges.count() ? "," : ""));
+        }
+        out.println(bins + (histogram.outside() > 0 ? String.format(Locale.ROOT,
+                ", above %.1f", histogram.outside()) : ""));
+        out.println("  demo S–N curve (invented): " + curve);
+        out.println(String.format(Locale.ROOT, "  Palmgren–Miner damage: D = %.3g for the day",
+                damage.damage()));
+        out.println("  A damage sum is an estimate with a large scatter. The design code that"
+                + " applies sets the curve,");
+        out.println("  the factors and the limit; a qualified (where required, licensed) engineer"
+                + " judges the structure.");
     }
 
     /** The link's invented true curve: mV/V at a load in kN. */

@@ -19,6 +19,9 @@ import org.strainmath.bridge.Bridge;
 import org.strainmath.bridge.StrainChannel;
 import org.strainmath.bridge.StrainGauge;
 import org.strainmath.calibration.CalibrationFit;
+import org.strainmath.history.Bins;
+import org.strainmath.history.Rainflow;
+import org.strainmath.history.RangeHistogram;
 import org.strainmath.material.PlaneStrain;
 import org.strainmath.quantity.Resistance;
 import org.strainmath.quantity.Strain;
@@ -32,7 +35,8 @@ import org.strainmath.uncertainty.UncertaintyResult;
  * Draws the guide's figures from the library itself (never by hand), as SVG, with XChart:
  * the nonlinearity of each bridge arrangement, Mohr's circle of the rosette example, the
  * residuals of NIST's Pontius data against a straight line and the quadratic, and the
- * uncertainty budget of the channel example as bars, and the kernels' throughput against block
+ * uncertainty budget of the channel example as bars, the range histogram of the fatigue
+ * page's example, and the kernels' throughput against block
  * size from the JMH results committed beside the figures ({@code throughput-jdk*.csv}, which
  * {@code docs/performance.md} says how to measure again).
  *
@@ -69,6 +73,7 @@ public final class Figures {
         written.add(save(budget(), out.resolve("channel-budget")));
         written.add(save(throughput(top.resolve("docs/figures/throughput-jdk17.csv"),
                 top.resolve("docs/figures/throughput-jdk25.csv")), out.resolve("throughput")));
+        written.add(save(rangeHistogram(), out.resolve("range-histogram")));
         return written;
     }
 
@@ -175,6 +180,39 @@ public final class Figures {
                 .xAxisTitle("input").yAxisTitle("contribution |c·u| (µε)").build();
         chart.getStyler().setLegendVisible(false);
         chart.addSeries("contribution", names, values);
+        return chart;
+    }
+
+    /**
+     * The strain history of the fatigue page's example (a bracket on a test rig, invented; the
+     * same recipe as the page's snippet): a slowly modulated load cycle, a vibration and noise.
+     */
+    static double[] bracketHistory() {
+        java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+        double[] strain = new double[20_000];
+        for (int i = 0; i < strain.length; i++) {
+            strain[i] = 400e-6 * Math.sin(i * 0.004) * Math.sin(i * 0.0003)
+                    + 120e-6 * Math.sin(i * 0.07) + 3e-6 * random.nextGaussian();
+        }
+        return strain;
+    }
+
+    /** The range histogram of the fatigue page's example, as bars of cycles per 50 µε bin. */
+    static CategoryChart rangeHistogram() {
+        Bins bins = Bins.uniform(0, 1200e-6, 24);
+        RangeHistogram histogram = Rainflow.astm().withGate(10e-6).count(bracketHistory())
+                .rangeHistogram(bins);
+        List<String> names = new ArrayList<>();
+        List<Double> values = new ArrayList<>();
+        for (int i = 0; i < bins.count(); i++) {
+            names.add(String.format(java.util.Locale.ROOT, "%.0f", bins.centre(i) * 1e6));
+            values.add(histogram.count(i));
+        }
+        CategoryChart chart = new CategoryChartBuilder().width(760).height(440)
+                .title("Rainflow ranges of the bracket example (ASTM E1049-85, gate 10 µε)")
+                .xAxisTitle("strain range, bin centre (µε)").yAxisTitle("cycles").build();
+        chart.getStyler().setLegendVisible(false);
+        chart.addSeries("cycles", names, values);
         return chart;
     }
 

@@ -18,14 +18,14 @@ class FiguresTest {
         List<Path> written = Figures.drawAll(out, Path.of("").toAbsolutePath().getParent());
         assertThat(written).extracting(p -> p.getFileName().toString()).containsExactly(
                 "nonlinearity.svg", "mohr-circle.svg", "pontius-residuals.svg", "channel-budget.svg",
-                "throughput.svg");
+                "throughput.svg", "range-histogram.svg");
         for (Path svg : written) {
             String text = Files.readString(svg);
             assertThat(text).as("%s", svg).contains("<svg").hasSizeGreaterThan(10_000);
         }
         // Every figure the guide shows is one the generator writes.
         for (String name : new String[] {"nonlinearity", "mohr-circle", "pontius-residuals", "channel-budget",
-            "throughput"}) {
+            "throughput", "range-histogram"}) {
             assertThat(Path.of("figures", name + ".svg")).as("committed figure %s", name).exists();
         }
     }
@@ -36,6 +36,21 @@ class FiguresTest {
         // practice, no source): −0.1 % per 1000 µε at K = 2, so −2 % at 20 000 µε.
         double[] y = Figures.nonlinearity().getSeriesMap().get("quarter").getYData();
         assertThat(y[y.length - 1]).isBetween(-2.1, -1.9);
+    }
+
+    @Test
+    void theRangeHistogramHoldsEveryCycleOfTheExample() {
+        // Every cycle of the example's count lies in one bar (the bins cover it), a half cycle
+        // counting 0.5: the bars add up to the count's total.
+        var series = Figures.rangeHistogram().getSeriesMap().get("cycles");
+        double sum = 0;
+        for (Number y : series.getYData()) {
+            sum += y.doubleValue();
+        }
+        double total = org.strainmath.history.Rainflow.astm().withGate(10e-6)
+                .count(Figures.bracketHistory()).total();
+        assertThat(sum).isEqualTo(total).isGreaterThan(100);
+        assertThat(series.getXData()).hasSize(24);
     }
 
     @Test
