@@ -27,6 +27,11 @@ final class Reversals {
     static final int RISING = 2;
     static final int FALLING = 3;
 
+    /** The bits of an exponent field that is all ones (NaN or an infinity). */
+    private static final long EXPONENT = 0x7FF0_0000_0000_0000L;
+    /** One in the lowest exponent bit: added to an all-ones exponent, it sets the sign bit. */
+    private static final long EXPONENT_ONE = 0x0010_0000_0000_0000L;
+
     final double gate;
     int phase = EMPTY;
     /** The open extreme since the last turning point (FLAT: the start itself). */
@@ -35,13 +40,16 @@ final class Reversals {
     /** The turning point the last {@link #scan} confirmed. */
     double confirmed;
     long confirmedPosition;
+    /** The turning points the last {@link #scan} wrote. */
+    int written;
+    /** Samples that were not finite, skipped by scans since the last {@link #takeSkipped}. */
+    private int skipped;
+    /** Negative after {@link #plain} exactly when a sample of its chunk was not finite. */
+    private long plainFlags;
 
     Reversals(double gate) {
         this.gate = gate;
     }
-
-    /** Samples that were not finite, skipped by scans since the last {@link #takeSkipped}. */
-    private int skipped;
 
     /**
      * Runs the detector over {@code x[from, end)} and writes the turning points it confirms to
@@ -53,7 +61,7 @@ final class Reversals {
      *
      * <p>For a caller who wants no positions written, chunk by chunk through {@link #plain},
      * which has no finite test per sample, and again through {@link #checked} for a chunk that
-     * held an infinity (rare: the library's kernels give NaN, not infinities). The two loops
+     * held a sample that is not finite (a NaN from a kernel, or an infinity). The two loops
      * differ by the finite test and the writes of positions only; both exist because C2 of
      * JDK 17 ran the loop that stores turning points about three times slower with one more
      * branch per sample (the finite test, or a bound on the output), and a branch-free finite
@@ -111,14 +119,6 @@ final class Reversals {
         }
         written = n - off;
     }
-
-    /** The bits of an exponent field that is all ones (NaN or an infinity). */
-    private static final long EXPONENT = 0x7FF0_0000_0000_0000L;
-    /** One in the lowest exponent bit: added to an all-ones exponent, it sets the sign bit. */
-    private static final long EXPONENT_ONE = 0x0010_0000_0000_0000L;
-
-    /** Negative after {@link #plain} exactly when a sample of its chunk was not finite. */
-    private long plainFlags;
 
     /**
      * The detector without a finite test per sample, no positions written: see {@link #scan}.
@@ -245,9 +245,6 @@ final class Reversals {
         confirmed = last;
         confirmedPosition = lastPos;
     }
-
-    /** The turning points the last {@link #scan} wrote. */
-    int written;
 
     /** The samples skipped since the last call, and starts the tally again. */
     int takeSkipped() {
