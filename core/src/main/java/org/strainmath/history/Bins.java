@@ -44,22 +44,7 @@ public final class Bins {
      */
     public static Bins ofEdges(double... edges) {
         Objects.requireNonNull(edges, "edges");
-        if (edges.length < 2) {
-            throw new IllegalArgumentException("edges must hold at least 2 values: "
-                    + edges.length);
-        }
-        double[] copy = edges.clone();
-        for (int i = 0; i < copy.length; i++) {
-            if (!Double.isFinite(copy[i])) {
-                throw new IllegalArgumentException("edges must be finite: edges[" + i + "] = "
-                        + copy[i]);
-            }
-            if (i > 0 && !(copy[i] > copy[i - 1])) {
-                throw new IllegalArgumentException("edges must be strictly increasing: edges["
-                        + i + "] = " + copy[i] + " after " + copy[i - 1]);
-            }
-            copy[i] += 0.0;
-        }
+        double[] copy = increasing(edges.clone(), 2, "edges");
         return new Bins(copy, Double.NaN, Double.NaN);
     }
 
@@ -182,6 +167,32 @@ public final class Bins {
             s.append(i == 0 ? "" : ", ").append(Format.number(edges[i]));
         }
         return s.append(']').toString();
+    }
+
+    /**
+     * Returns {@code a}, each value made +0.0 where it was −0.0, if it holds at least
+     * {@code least} finite values in strictly increasing order: the check of bin edges and of
+     * crossing levels.
+     *
+     * @throws IllegalArgumentException otherwise, naming {@code name} and the value
+     */
+    static double[] increasing(double[] a, int least, String name) {
+        if (a.length < least) {
+            throw new IllegalArgumentException(name + " must hold at least " + least + " value"
+                    + (least == 1 ? "" : "s") + ": " + a.length);
+        }
+        for (int i = 0; i < a.length; i++) {
+            if (!Double.isFinite(a[i])) {
+                throw new IllegalArgumentException(name + " must be finite: " + name + "[" + i
+                        + "] = " + a[i]);
+            }
+            if (i > 0 && !(a[i] > a[i - 1])) {
+                throw new IllegalArgumentException(name + " must be strictly increasing: " + name
+                        + "[" + i + "] = " + a[i] + " after " + a[i - 1]);
+            }
+            a[i] += 0.0;
+        }
+        return a;
     }
 
     /** The edges as they are, for the histograms of this package (not copied). */

@@ -61,21 +61,7 @@ public final class LevelCrossings implements CycleConsumer {
     }
 
     private static double[] checked(double[] levels) {
-        if (levels.length == 0) {
-            throw new IllegalArgumentException("levels must hold at least 1 value: 0");
-        }
-        for (int i = 0; i < levels.length; i++) {
-            if (!Double.isFinite(levels[i])) {
-                throw new IllegalArgumentException("levels must be finite: levels[" + i + "] = "
-                        + levels[i]);
-            }
-            if (i > 0 && !(levels[i] > levels[i - 1])) {
-                throw new IllegalArgumentException("levels must be strictly increasing: levels["
-                        + i + "] = " + levels[i] + " after " + levels[i - 1]);
-            }
-            levels[i] += 0.0;
-        }
-        return levels;
+        return Bins.increasing(levels, 1, "levels");
     }
 
     /** Adds the crossings of one cycle (see the class comment). */
