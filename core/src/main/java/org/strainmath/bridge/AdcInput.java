@@ -1,10 +1,14 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
 import org.strainmath.internal.Kernels;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Strain;
 import org.strainmath.quantity.Voltage;
 import org.strainmath.quantity.VoltageRatio;
@@ -33,8 +37,10 @@ import org.strainmath.quantity.VoltageRatio;
  * </pre>
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class AdcInput {
+public final class AdcInput implements Serializable {
 
     /** How the converter writes negative inputs. */
     public enum Coding {
@@ -287,5 +293,52 @@ public final class AdcInput {
                 + (coding == Coding.TWOS_COMPLEMENT ? "two's complement" : "offset binary")
                 + ", gain " + Format.number(gain) + ", " + excitation + zero + ", "
                 + ratioPerCode() + " per code]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(bits, coding, gain, fullScale, excitationVolts, codeOffset);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("AdcInput");
+    }
+
+    /**
+     * The serial form of a AdcInput: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final int bits;
+        private final Coding coding;
+        private final double gain;
+        private final double fullScale;
+        private final double excitationVolts;
+        private final double codeOffset;
+
+        Serial(int bits, Coding coding, double gain, double fullScale, double excitationVolts, double codeOffset) {
+            this.bits = bits;
+            this.coding = coding;
+            this.gain = gain;
+            this.fullScale = fullScale;
+            this.excitationVolts = excitationVolts;
+            this.codeOffset = codeOffset;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("AdcInput", () -> {
+                AdcInput input = Double.isNaN(excitationVolts)
+                        ? ratiometric(bits, gain).withReferenceRatio(fullScale)
+                        : absolute(bits, gain, Voltage.ofVolts(fullScale),
+                                Voltage.ofVolts(excitationVolts));
+                return input.withCoding(coding).withCodeOffset(codeOffset);
+            });
+        }
     }
 }

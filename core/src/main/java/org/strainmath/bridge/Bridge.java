@@ -1,5 +1,8 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Objects;
@@ -7,6 +10,7 @@ import java.util.Objects;
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
 import org.strainmath.internal.Kernels;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Resistance;
 import org.strainmath.quantity.Strain;
 import org.strainmath.quantity.Voltage;
@@ -83,8 +87,10 @@ import org.strainmath.quantity.VoltageRatio;
  * </pre>
  *
  * <p>Immutable and thread-safe: one configured bridge may serve any number of threads.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class Bridge {
+public final class Bridge implements Serializable {
 
     private static final MathContext EXACT_ENOUGH = new MathContext(60);
 
@@ -1760,5 +1766,58 @@ public final class Bridge {
         String leads = leadsText();
         return arrangementText() + zero + " [" + armList(arms)
                 + (leads.isEmpty() ? "" : "; leads: " + leads) + "]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(arrangement, arms.clone(), armLeads.clone(), excitationLeads, offset);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("Bridge");
+    }
+
+    /**
+     * The serial form of a Bridge: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final String arrangement;
+        private final BridgeArm[] arms;
+        private final double[] armLeads;
+        private final double excitationLeads;
+        private final double offset;
+
+        Serial(String arrangement, BridgeArm[] arms, double[] armLeads, double excitationLeads, double offset) {
+            this.arrangement = arrangement;
+            this.arms = arms;
+            this.armLeads = armLeads;
+            this.excitationLeads = excitationLeads;
+            this.offset = offset;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("Bridge", () -> {
+                Objects.requireNonNull(arrangement, "arrangement");
+                if (arms.length != 4 || armLeads.length != 4) {
+                    throw new IllegalArgumentException("arms and armLeads must hold 4 each: "
+                            + arms.length + " and " + armLeads.length);
+                }
+                for (int a = 0; a < 4; a++) {
+                    Objects.requireNonNull(arms[a], "arms[" + a + "]");
+                    Checks.nonNegativeFinite(armLeads[a], "armLeads[" + a + "]");
+                }
+                Checks.nonNegativeFinite(excitationLeads, "excitationLeads");
+                Checks.finite(offset, "offset");
+                return new Bridge(arrangement, arms.clone(), armLeads.clone(), excitationLeads,
+                        offset);
+            });
+        }
     }
 }

@@ -1,10 +1,14 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 import java.util.Optional;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Resistance;
 
 /**
@@ -24,9 +28,12 @@ import org.strainmath.quantity.Resistance;
  * </pre>
  *
  * <p>Immutable and thread-safe; equal to another arm of the same kind and data.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class BridgeArm {
+public final class BridgeArm implements Serializable {
 
+    @SuppressWarnings("serial") // never serialized: the serial form holds the defining values
     private final Resistance nominalResistance;
     private final StrainGauge gauge;     // null for a completion resistor
     private final double strainMultiple; // 0 for a completion resistor or a dummy gauge
@@ -153,5 +160,48 @@ public final class BridgeArm {
             return "dummy gauge " + data;
         }
         return "active gauge ×" + Format.number(strainMultiple) + " " + data;
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(nominalResistance.toOhms(), gauge, strainMultiple);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("BridgeArm");
+    }
+
+    /**
+     * The serial form of a BridgeArm: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double ohms;
+        private final StrainGauge gauge;
+        private final double multiple;
+
+        Serial(double ohms, StrainGauge gauge, double multiple) {
+            this.ohms = ohms;
+            this.gauge = gauge;
+            this.multiple = multiple;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("BridgeArm", () -> {
+                Checks.positiveFinite(ohms, "resistance");
+                Checks.finite(multiple, "strainMultiple");
+                if (gauge == null && multiple != 0) {
+                    throw new IllegalArgumentException("strainMultiple must be 0 for a completion"
+                            + " resistor: " + multiple);
+                }
+                return new BridgeArm(Resistance.ofOhms(ohms), gauge, multiple);
+            });
+        }
     }
 }

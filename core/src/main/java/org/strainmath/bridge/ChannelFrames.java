@@ -1,10 +1,14 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
+import org.strainmath.internal.SerialForms;
 
 /**
  * A multi-channel input that delivers interleaved frames: frame i holds one code per channel,
@@ -18,8 +22,10 @@ import org.strainmath.internal.Checks;
  * </pre>
  *
  * <p>Immutable and thread-safe; conversions allocate nothing.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class ChannelFrames {
+public final class ChannelFrames implements Serializable {
 
     private final StrainChannel[] channels;
 
@@ -123,5 +129,38 @@ public final class ChannelFrames {
     @Override
     public String toString() {
         return "ChannelFrames[" + channels.length + " channels per frame]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(channels.clone());
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("ChannelFrames");
+    }
+
+    /**
+     * The serial form of a ChannelFrames: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final StrainChannel[] channels;
+
+        Serial(StrainChannel[] channels) {
+            this.channels = channels;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("ChannelFrames", () -> {
+                return of(channels.clone());
+            });
+        }
     }
 }

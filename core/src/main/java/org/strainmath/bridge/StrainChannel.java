@@ -1,10 +1,14 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
 import org.strainmath.internal.Kernels;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Strain;
 import org.strainmath.quantity.Temperature;
 import org.strainmath.quantity.VoltageRatio;
@@ -34,8 +38,10 @@ import org.strainmath.quantity.VoltageRatio;
  * </pre>
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class StrainChannel {
+public final class StrainChannel implements Serializable {
 
     /**
      * Readings within this share of the reading interval's width from either end are never
@@ -51,7 +57,9 @@ public final class StrainChannel {
     /** transverseFactor × spanFactor: the one factor the kernels apply. */
     private final double factor;
     private final ThermalOutput thermalOutput;   // null unless set
+    @SuppressWarnings("serial") // never serialized: the serial form holds the defining values
     private final Temperature zeroTemperature;   // null unless set
+    @SuppressWarnings("serial") // never serialized: the serial form holds the defining values
     private final ThermalOutput.Correction thermal;
     /** Relative gauge-factor change per kelvin of the active gauges, and its reference, °C. */
     private final double drift;
@@ -684,5 +692,56 @@ public final class StrainChannel {
     /** The contents of a {@code Name[...]} text. */
     private static String inside(String text) {
         return text.substring(text.indexOf('[') + 1, text.length() - 1);
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(bridge, input, transverseRatio, thermalOutput,
+                zeroTemperature == null ? Double.NaN : zeroTemperature.toKelvin(), spanFactor);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("StrainChannel");
+    }
+
+    /**
+     * The serial form of a StrainChannel: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final Bridge bridge;
+        private final AdcInput input;
+        private final double transverseRatio;
+        private final ThermalOutput thermalOutput;
+        private final double zeroKelvin;
+        private final double spanFactor;
+
+        Serial(Bridge bridge, AdcInput input, double transverseRatio, ThermalOutput thermalOutput, double zeroKelvin, double spanFactor) {
+            this.bridge = bridge;
+            this.input = input;
+            this.transverseRatio = transverseRatio;
+            this.thermalOutput = thermalOutput;
+            this.zeroKelvin = zeroKelvin;
+            this.spanFactor = spanFactor;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("StrainChannel", () -> {
+                StrainChannel c = of(bridge, input);
+                if (!Double.isNaN(transverseRatio)) {
+                    c = c.withTransverseCorrection(transverseRatio);
+                }
+                if (thermalOutput != null) {
+                    c = c.withThermalOutput(thermalOutput, Temperature.ofKelvin(zeroKelvin));
+                }
+                return spanFactor == 1.0 ? c : c.withSpanCorrection(spanFactor);
+            });
+        }
     }
 }

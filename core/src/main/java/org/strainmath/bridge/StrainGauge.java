@@ -1,9 +1,13 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Resistance;
 import org.strainmath.quantity.Strain;
 import org.strainmath.quantity.Temperature;
@@ -33,9 +37,12 @@ import org.strainmath.quantity.Temperature;
  * </pre>
  *
  * <p>Immutable and thread-safe; equal to another gauge with the same data.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class StrainGauge {
+public final class StrainGauge implements Serializable {
 
+    @SuppressWarnings("serial") // never serialized: the serial form holds the defining values
     private final Resistance nominalResistance;
     private final double gaugeFactor;
     private final double transverseSensitivity;
@@ -364,5 +371,59 @@ public final class StrainGauge {
         String area = gridArea == 0 ? "" : ", grid " + Format.withUnit(gridArea, "mm²");
         return "StrainGauge[" + nominalResistance + ", K=" + Format.number(gaugeFactor) + kt + area
                 + "]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(nominalResistance.toOhms(), gaugeFactor, transverseSensitivity,
+                calibrationPoissonRatio, gridArea, gaugeFactorDrift, gaugeFactorCelsius);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("StrainGauge");
+    }
+
+    /**
+     * The serial form of a StrainGauge: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double ohms;
+        private final double gaugeFactor;
+        private final double kt;
+        private final double poisson;
+        private final double gridArea;
+        private final double drift;
+        private final double celsius;
+
+        Serial(double ohms, double gaugeFactor, double kt, double poisson, double gridArea, double drift, double celsius) {
+            this.ohms = ohms;
+            this.gaugeFactor = gaugeFactor;
+            this.kt = kt;
+            this.poisson = poisson;
+            this.gridArea = gridArea;
+            this.drift = drift;
+            this.celsius = celsius;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("StrainGauge", () -> {
+                Checks.positiveFinite(ohms, "ohms");
+                Checks.positiveFinite(gaugeFactor, "gaugeFactor");
+                Checks.inOpenInterval(kt, -1, 1, "kt");
+                Checks.inOpenInterval(poisson, -1, 0.5, "poissonRatio");
+                Checks.nonNegativeFinite(gridArea, "gridArea");
+                Checks.finite(drift, "percentPer100Kelvin");
+                Checks.finite(celsius, "reference");
+                return new StrainGauge(Resistance.ofOhms(ohms), gaugeFactor, kt, poisson, gridArea,
+                        drift, celsius);
+            });
+        }
     }
 }

@@ -1,10 +1,14 @@
 package org.strainmath.bridge;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
 import org.strainmath.internal.Kernels;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Strain;
 import org.strainmath.quantity.Temperature;
 
@@ -24,8 +28,10 @@ import org.strainmath.quantity.Temperature;
  * <p>A channel zeroed at T0 subtracts εapp,K(T) − εapp,K(T0): see {@link #zeroedAt}.
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class ThermalOutput {
+public final class ThermalOutput implements Serializable {
 
     /** The gauge factor thermal-output curves are usually measured with. */
     public static final double DEFAULT_REFERENCE_GAUGE_FACTOR = 2.0;
@@ -318,6 +324,45 @@ public final class ThermalOutput {
         public String toString() {
             return "ThermalOutput.Correction[zeroed at " + zeroTemperature + ", K="
                     + Format.number(gaugeFactor) + "]";
+        }
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(givenCoefficients.clone(), fahrenheit, referenceGaugeFactor);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("ThermalOutput");
+    }
+
+    /**
+     * The serial form of a ThermalOutput: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double[] coefficients;
+        private final boolean fahrenheit;
+        private final double referenceGaugeFactor;
+
+        Serial(double[] coefficients, boolean fahrenheit, double referenceGaugeFactor) {
+            this.coefficients = coefficients;
+            this.fahrenheit = fahrenheit;
+            this.referenceGaugeFactor = referenceGaugeFactor;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("ThermalOutput", () -> {
+                ThermalOutput curve = fahrenheit ? ofFahrenheit(coefficients.clone())
+                        : ofCelsius(coefficients.clone());
+                return curve.withReferenceGaugeFactor(referenceGaugeFactor);
+            });
         }
     }
 }

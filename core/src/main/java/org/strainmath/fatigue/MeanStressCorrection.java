@@ -1,8 +1,12 @@
 package org.strainmath.fatigue;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Stress;
 
 /**
@@ -26,9 +30,10 @@ import org.strainmath.quantity.Stress;
  * <p>Which correction fits depends on the material and the data behind the curve: design codes
  * for welded structures use ranges without a correction (residual stresses make the applied mean
  * of little account); Goodman is conservative for most ductile metals in tension, Gerber less so;
- * Morrow and SWT suit strain-life and stress-life data of metals. Immutable and thread-safe.
+ * Morrow and SWT suit strain-life and stress-life data of metals. Immutable, thread-safe and
+ * serializable (its kind and strength only).
  */
-public final class MeanStressCorrection {
+public final class MeanStressCorrection implements Serializable {
 
     private enum Kind {
         NONE("no mean-stress correction"),
@@ -174,6 +179,52 @@ public final class MeanStressCorrection {
                 return kind.label + " (σf' = " + Stress.ofPascals(strength) + ")";
             default:
                 return kind.label;
+        }
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(kind.name(), strength);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("MeanStressCorrection");
+    }
+
+    /**
+     * The serial form of a MeanStressCorrection: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final String kind;
+        private final double strength;
+
+        Serial(String kind, double strength) {
+            this.kind = kind;
+            this.strength = strength;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("MeanStressCorrection", () -> {
+                switch (Kind.valueOf(kind)) {
+                    case GOODMAN:
+                        return goodman(Stress.ofPascals(strength));
+                    case GERBER:
+                        return gerber(Stress.ofPascals(strength));
+                    case MORROW:
+                        return morrow(Stress.ofPascals(strength));
+                    case SMITH_WATSON_TOPPER:
+                        return smithWatsonTopper();
+                    default:
+                        return none();
+                }
+            });
         }
     }
 }

@@ -1,10 +1,14 @@
 package org.strainmath.fatigue;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Stress;
 
 /**
@@ -38,8 +42,10 @@ import org.strainmath.quantity.Stress;
  * on JDK 17 (measured); the rest uses {@link StrictMath}.
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class SnCurve {
+public final class SnCurve implements Serializable {
 
     private final double referenceRange;
     private final double referenceCycles;
@@ -248,5 +254,55 @@ public final class SnCurve {
             s.append("; no damage below ").append(Stress.ofPascals(cutOff));
         }
         return s.append(']').toString();
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(referenceRange, referenceCycles, slope, kneeCycles, secondSlope, cutOff);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("SnCurve");
+    }
+
+    /**
+     * The serial form of a SnCurve: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double referenceRange;
+        private final double referenceCycles;
+        private final double slope;
+        private final double kneeCycles;
+        private final double secondSlope;
+        private final double cutOff;
+
+        Serial(double referenceRange, double referenceCycles, double slope, double kneeCycles, double secondSlope, double cutOff) {
+            this.referenceRange = referenceRange;
+            this.referenceCycles = referenceCycles;
+            this.slope = slope;
+            this.kneeCycles = kneeCycles;
+            this.secondSlope = secondSlope;
+            this.cutOff = cutOff;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("SnCurve", () -> {
+                SnCurve c = new SnCurve(Checks.positiveFinite(referenceRange, "range"),
+                        Checks.positiveFinite(referenceCycles, "cycles"),
+                        Checks.positiveFinite(slope, "slope"), Double.POSITIVE_INFINITY,
+                        Double.NaN, 0);
+                if (!Double.isNaN(secondSlope)) {
+                    c = c.withKnee(kneeCycles, secondSlope);
+                }
+                return cutOff == 0 ? c : c.withCutOff(Stress.ofPascals(cutOff));
+            });
+        }
     }
 }

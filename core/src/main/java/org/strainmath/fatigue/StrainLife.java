@@ -1,9 +1,13 @@
 package org.strainmath.fatigue;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Stress;
 
 /**
@@ -44,8 +48,10 @@ import org.strainmath.quantity.Stress;
  * </pre>
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class StrainLife implements FatigueLife {
+public final class StrainLife implements Serializable, FatigueLife {
 
     private enum Correction {
         NONE("fully reversed"), MORROW("Morrow"), SMITH_WATSON_TOPPER("Smith–Watson–Topper");
@@ -293,5 +299,51 @@ public final class StrainLife implements FatigueLife {
                 + Format.number(strengthExponent) + ", εf' = "
                 + Format.number(ductilityCoefficient) + ", c = "
                 + Format.number(ductilityExponent) + ", " + correction.label + "]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(modulus, strengthCoefficient, strengthExponent,
+                ductilityCoefficient, ductilityExponent, correction.name());
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("StrainLife");
+    }
+
+    /**
+     * The serial form of a StrainLife: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double modulus;
+        private final double strengthCoefficient;
+        private final double strengthExponent;
+        private final double ductilityCoefficient;
+        private final double ductilityExponent;
+        private final String correction;
+
+        Serial(double modulus, double strengthCoefficient, double strengthExponent, double ductilityCoefficient, double ductilityExponent, String correction) {
+            this.modulus = modulus;
+            this.strengthCoefficient = strengthCoefficient;
+            this.strengthExponent = strengthExponent;
+            this.ductilityCoefficient = ductilityCoefficient;
+            this.ductilityExponent = ductilityExponent;
+            this.correction = correction;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("StrainLife", () -> {
+                return of(Stress.ofPascals(modulus), Stress.ofPascals(strengthCoefficient),
+                        strengthExponent, ductilityCoefficient, ductilityExponent)
+                        .with(Correction.valueOf(correction));
+            });
+        }
     }
 }

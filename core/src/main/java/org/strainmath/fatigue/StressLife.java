@@ -1,7 +1,11 @@
 package org.strainmath.fatigue;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
+import org.strainmath.internal.SerialForms;
 import org.strainmath.quantity.Stress;
 
 /**
@@ -20,8 +24,10 @@ import org.strainmath.quantity.Stress;
  * </pre>
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class StressLife implements FatigueLife {
+public final class StressLife implements Serializable, FatigueLife {
 
     private final SnCurve curve;
     private final MeanStressCorrection correction;
@@ -108,5 +114,40 @@ public final class StressLife implements FatigueLife {
     @Override
     public String toString() {
         return "StressLife[" + curve + ", " + correction + "]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(curve, correction);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("StressLife");
+    }
+
+    /**
+     * The serial form of a StressLife: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final SnCurve curve;
+        private final MeanStressCorrection correction;
+
+        Serial(SnCurve curve, MeanStressCorrection correction) {
+            this.curve = curve;
+            this.correction = correction;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("StressLife", () -> {
+                return of(curve).withMeanStressCorrection(correction);
+            });
+        }
     }
 }

@@ -1,9 +1,13 @@
 package org.strainmath.history;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Arrays;
 import java.util.Objects;
 
 import org.strainmath.internal.Format;
+import org.strainmath.internal.SerialForms;
 
 /**
  * The bins of a histogram: {@code n} bins between {@code n + 1} strictly increasing, finite
@@ -18,8 +22,10 @@ import org.strainmath.internal.Format;
  * </pre>
  *
  * <p>Immutable and thread-safe. Two bins are equal when their edges are.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class Bins {
+public final class Bins implements Serializable {
 
     private final double[] edges;
     /** For uniform bins: low edge and width, used to find a bin without a search; else NaN. */
@@ -213,5 +219,40 @@ public final class Bins {
 
     boolean isUniform() {
         return width == width;
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(edges.clone(), isUniform());
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("Bins");
+    }
+
+    /**
+     * The serial form of a Bins: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double[] edges;
+        private final boolean uniform;
+
+        Serial(double[] edges, boolean uniform) {
+            this.edges = edges;
+            this.uniform = uniform;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("Bins", () -> {
+                return restore(edges.clone(), uniform);
+            });
+        }
     }
 }

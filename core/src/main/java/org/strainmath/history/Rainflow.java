@@ -1,9 +1,13 @@
 package org.strainmath.history;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.Format;
+import org.strainmath.internal.SerialForms;
 
 /**
  * Rainflow cycle counting of a history of strain or stress, as ASTM E1049-85 (reapproved 2017),
@@ -42,9 +46,10 @@ import org.strainmath.internal.Format;
  * repeated (5.4.3), or left uncounted.
  *
  * <p>Values are in the unit of the history; the count does not need to know it. Immutable and
- * thread-safe; the counters it makes are not.
+ * thread-safe; the counters it makes are not. Serializable, for a stream engine that ships
+ * configurations to other processes (a counter's state has a byte form of its own).
  */
-public final class Rainflow {
+public final class Rainflow implements Serializable {
 
     /** What a count does with the residue, the turning points no closed cycle took. */
     public enum Residue {
@@ -184,5 +189,40 @@ public final class Rainflow {
         }
         return "Rainflow[ASTM E1049-85 5.4.4, gate " + Format.number(gate) + ", " + treatment
                 + "]";
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(gate, residue);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("Rainflow");
+    }
+
+    /**
+     * The serial form of a Rainflow: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double gate;
+        private final Residue residue;
+
+        Serial(double gate, Residue residue) {
+            this.gate = gate;
+            this.residue = residue;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("Rainflow", () -> {
+                return astm().withGate(gate).withResidue(residue);
+            });
+        }
     }
 }

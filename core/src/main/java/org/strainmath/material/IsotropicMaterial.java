@@ -1,5 +1,6 @@
 package org.strainmath.material;
 
+import org.strainmath.internal.SerialForms;
 import static org.strainmath.material.ElasticConstant.BULK_MODULUS;
 import static org.strainmath.material.ElasticConstant.LAME_FIRST_PARAMETER;
 import static org.strainmath.material.ElasticConstant.POISSONS_RATIO;
@@ -7,6 +8,9 @@ import static org.strainmath.material.ElasticConstant.P_WAVE_MODULUS;
 import static org.strainmath.material.ElasticConstant.SHEAR_MODULUS;
 import static org.strainmath.material.ElasticConstant.YOUNGS_MODULUS;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.Objects;
@@ -53,8 +57,10 @@ import org.strainmath.quantity.Temperature;
  * <p>No table of named materials is built in: enter the constants of the part at hand.
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class IsotropicMaterial {
+public final class IsotropicMaterial implements Serializable {
 
     private final double youngs;
     private final double poisson;
@@ -65,7 +71,9 @@ public final class IsotropicMaterial {
     /** Coefficient of linear thermal expansion, 1/K; NaN when not given. */
     private final double alpha;
 
+    @SuppressWarnings("serial") // never serialized: the serial form holds the defining values
     private final PlaneStiffness planeStress;
+    @SuppressWarnings("serial") // never serialized: the serial form holds the defining values
     private final PlaneStiffness planeStrain;
 
     private IsotropicMaterial(double[] six, double alpha) {
@@ -524,5 +532,57 @@ public final class IsotropicMaterial {
             text.append(", α=").append(Format.number(alpha)).append(" /K");
         }
         return text.append(']').toString();
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(six(), alpha);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("IsotropicMaterial");
+    }
+
+    /**
+     * The serial form of a IsotropicMaterial: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double[] six;
+        private final double alpha;
+
+        Serial(double[] six, double alpha) {
+            this.six = six;
+            this.alpha = alpha;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("IsotropicMaterial", () -> {
+                if (six.length != 6) {
+                    throw new IllegalArgumentException("six must hold six constants: "
+                            + six.length);
+                }
+                // The six as they were, so that a copy computes the same bits; they must be
+                // one material's, as E and ν give it, to a few ulp.
+                double[] expected = of(Stress.ofPascals(six[0]), six[1]).six();
+                for (int k = 0; k < 6; k++) {
+                    if (!(Math.abs(six[k] - expected[k]) <= 1e-12 * Math.abs(expected[k]))) {
+                        throw new IllegalArgumentException("six must be the constants of one"
+                                + " material: constant " + k + " is " + six[k] + ", E and ν give "
+                                + expected[k]);
+                    }
+                }
+                if (!Double.isNaN(alpha)) {
+                    Checks.finite(alpha, "perKelvin");        // NaN: no expansion given
+                }
+                return new IsotropicMaterial(six.clone(), alpha);
+            });
+        }
     }
 }

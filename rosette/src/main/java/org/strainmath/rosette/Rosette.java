@@ -1,5 +1,8 @@
 package org.strainmath.rosette;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serializable;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -11,6 +14,7 @@ import java.util.Optional;
 
 import org.strainmath.bridge.StrainGauge;
 import org.strainmath.internal.Checks;
+import org.strainmath.internal.SerialForms;
 import org.strainmath.material.IsotropicMaterial;
 import org.strainmath.material.PlaneStrain;
 import org.strainmath.quantity.Angle;
@@ -56,8 +60,10 @@ import org.strainmath.quantity.Strain;
  * rectangular and delta rosettes, large for gauges a few degrees apart).
  *
  * <p>Immutable and thread-safe.
+ * Serializable, for a stream engine that ships configurations to other processes: the
+ * stream holds the defining values only, checked again as the factories check them.
  */
-public final class Rosette {
+public final class Rosette implements Serializable {
 
     /** Below this ratio of Mohr radius to centre a state is taken as equal-biaxial. */
     static final double EQUAL_BIAXIAL = 1e-12;
@@ -712,5 +718,72 @@ public final class Rosette {
     public int hashCode() {
         return Objects.hash(kind, Arrays.hashCode(rowC), Arrays.hashCode(rowD),
                 Arrays.hashCode(rowH), material);
+    }
+
+    // ---------------------------------------------------------------- serial form
+
+    private static final long serialVersionUID = 1L;
+
+    /** Writes the serial form ({@link Serial}): the defining values only. */
+    private Object writeReplace() {
+        return new Serial(kind, nominal.clone(), measured == null ? null : measured.clone(), clockwise,
+                reference, grids == null ? null : grids.clone(), material, tee);
+    }
+
+    /** A stream must hold the serial form, never the fields of this class. */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw SerialForms.proxyRequired("Rosette");
+    }
+
+    /**
+     * The serial form of a Rosette: its defining values, rebuilt on reading through the checks
+     * of the factories.
+     */
+    private static final class Serial implements Serializable {
+        private static final long serialVersionUID = 1L;
+        private final String kind;
+        private final double[] nominal;
+        private final double[] measured;
+        private final boolean clockwise;
+        private final double reference;
+        private final StrainGauge[] grids;
+        private final IsotropicMaterial material;
+        private final boolean tee;
+
+        Serial(String kind, double[] nominal, double[] measured, boolean clockwise, double reference, StrainGauge[] grids, IsotropicMaterial material, boolean tee) {
+            this.kind = kind;
+            this.nominal = nominal;
+            this.measured = measured;
+            this.clockwise = clockwise;
+            this.reference = reference;
+            this.grids = grids;
+            this.material = material;
+            this.tee = tee;
+        }
+
+        private Object readResolve() throws InvalidObjectException {
+            return SerialForms.rebuild("Rosette", () -> {
+                Objects.requireNonNull(kind, "kind");
+                int n = nominal.length;
+                if (n < 2 || (measured != null && measured.length != n)
+                        || (grids != null && grids.length != n)) {
+                    throw new IllegalArgumentException("nominal, measured and grids must hold one"
+                            + " angle or gauge per gauge, at least 2: " + n);
+                }
+                for (int j = 0; j < n; j++) {
+                    Checks.finite(nominal[j], "nominal[" + j + "]");
+                    if (measured != null) {
+                        Checks.finite(measured[j], "measured[" + j + "]");
+                    }
+                    if (grids != null) {
+                        Objects.requireNonNull(grids[j], "grids[" + j + "]");
+                    }
+                }
+                Checks.finite(reference, "reference");
+                return new Rosette(kind, nominal.clone(), measured == null ? null
+                        : measured.clone(), clockwise, reference,
+                        grids == null ? null : grids.clone(), material, tee);
+            });
+        }
     }
 }
