@@ -132,7 +132,9 @@ class DocumentedExamplesTest {
     /** Where the library's classes are, as this test's JVM found them. */
     private static List<String> classPath() throws URISyntaxException {
         List<String> entries = new ArrayList<>();
-        for (Class<?> type : new Class<?>[] {Strain.class, Demo.class}) {
+        for (Class<?> type : new Class<?>[] {Strain.class, Demo.class,
+            org.apache.kafka.streams.Topology.class, org.apache.kafka.common.serialization.Serde.class,
+            org.apache.kafka.streams.TopologyTestDriver.class}) {
             entries.add(Path.of(type.getProtectionDomain().getCodeSource().getLocation().toURI())
                     .toString());
         }
