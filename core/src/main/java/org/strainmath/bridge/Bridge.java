@@ -4,7 +4,6 @@ import java.io.InvalidObjectException;
 import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.Objects;
 
 import org.strainmath.internal.Checks;
@@ -92,25 +91,7 @@ import org.strainmath.quantity.VoltageRatio;
  */
 public final class Bridge implements Serializable {
 
-    private static final MathContext EXACT_ENOUGH = new MathContext(60);
-
-    /**
-     * The largest strain magnitude the model accepts, 10 m/m (1000 %). No bonded gauge survives a
-     * twentieth of it; the bound keeps every per-sample product finite.
-     */
-    static final double STRAIN_LIMIT = 10.0;
-
     private static final double[] NO_LEADS = new double[4];
-
-    /** The shape of the rational function r(ε), which decides the kernel. */
-    private enum Form {
-        /** r = n0 + n1·ε. */
-        LINEAR,
-        /** r = (n0 + n1·ε) / (1 + d1·ε). */
-        FIRST_DEGREE,
-        /** The general case. */
-        QUADRATIC
-    }
 
     private final String arrangement;
     private final BridgeArm[] arms;
@@ -120,29 +101,15 @@ public final class Bridge implements Serializable {
     private final double excitationLeads;
     /** Added to the bridge equation by {@link #zeroedByOffset}: V/V. */
     private final double offset;
-
-    private final double n0;
-    private final double n1;
-    private final double n2;
-    private final double d1;
-    private final double d2;
-    /** dr/dε at ε = 0. */
-    private final double slope;
     /** The slope the same arms give without any lead resistance. */
     private final double slopeWithoutLeads;
     /** The output at zero strain the same arms give without any lead resistance. */
     private final double zeroWithoutLeads;
-    /** The sign of the slope, which selects the physical root. */
-    private final double rootSign;
-    private final Form form;
-    private final boolean balanced;
-
-    /** Open interval of physical strains. */
-    private final double strainLow;
-    private final double strainHigh;
-    /** Open interval of physical readings. */
-    private final double ratioLow;
-    private final double ratioHigh;
+    /** The bridge equation: coefficients, form, intervals. */
+    private final BridgeEquation equation;
+    /** The block loops over doubles and over codes, fed by the equation. */
+    private final BridgeLoops loops;
+    private final CodeLoops codeLoops;
 
     private Bridge(String arrangement, BridgeArm[] arms, double[] armLeads, double excitationLeads,
             double offset) {
@@ -152,161 +119,12 @@ public final class Bridge implements Serializable {
         this.excitationLeads = excitationLeads;
         this.offset = offset;
 
-        BigDecimal[] c = expand(arms, armLeads, excitationLeads);
-        this.balanced = c[0].signum() == 0;
-        BigDecimal[] bare = expand(arms, new double[4], 0.0);
-        this.zeroWithoutLeads = bare[0].divide(bare[3], EXACT_ENOUGH).doubleValue();
-        this.slopeWithoutLeads = slopeOf(bare).doubleValue();
-
-        // The offset adds to r: (N + offset·D) / D.
-        BigDecimal off = new BigDecimal(offset);
-        for (int i = 0; i < 3; i++) {
-            c[i] = c[i].add(off.multiply(c[i + 3]));
-        }
-        BigDecimal d0 = c[3];
-        this.n0 = c[0].divide(d0, EXACT_ENOUGH).doubleValue();
-        this.n1 = c[1].divide(d0, EXACT_ENOUGH).doubleValue();
-        this.n2 = c[2].divide(d0, EXACT_ENOUGH).doubleValue();
-        this.d1 = c[4].divide(d0, EXACT_ENOUGH).doubleValue();
-        this.d2 = c[5].divide(d0, EXACT_ENOUGH).doubleValue();
-        BigDecimal bigSlope = slopeOf(c);
-        if (bigSlope.signum() == 0) {
-            throw new IllegalArgumentException(
-                    "arms must give an output that changes with strain: " + armList(arms));
-        }
-        this.slope = bigSlope.doubleValue();
-        this.rootSign = bigSlope.signum();
-        if (c[2].signum() == 0 && c[4].signum() == 0 && c[5].signum() == 0) {
-            this.form = Form.LINEAR;
-        } else if (c[2].signum() == 0 && c[5].signum() == 0) {
-            this.form = Form.FIRST_DEGREE;
-        } else {
-            this.form = Form.QUADRATIC;
-        }
-
-        // Physical strains: within the model's limit, every gauge resistance positive ...
-        double low = -STRAIN_LIMIT;
-        double high = STRAIN_LIMIT;
-        for (BridgeArm arm : arms) {
-            double k = arm.effectiveGaugeFactor() * arm.strainMultiple();
-            if (k > 0) {
-                low = Math.max(low, -1.0 / k);
-            } else if (k < 0) {
-                high = Math.min(high, -1.0 / k);
-            }
-        }
-        // ... and the bridge on its monotonic branch: dr/dε = P(ε)/D(ε)², where
-        // P = N'·D − N·D' = (N1·D0 − N0·D1) + 2·(N2·D0 − N0·D2)·ε + (N2·D1 − N1·D2)·ε²
-        // (the cubic terms cancel), keeps its sign between the roots of P nearest to zero.
-        double p0 = c[1].multiply(c[3]).subtract(c[0].multiply(c[4])).doubleValue();
-        double p1 = c[2].multiply(c[3]).subtract(c[0].multiply(c[5])).doubleValue() * 2;
-        double p2 = c[2].multiply(c[4]).subtract(c[1].multiply(c[5])).doubleValue();
-        for (double root : realRoots(p2, p1, p0)) {
-            if (root > 0 && root < high) {
-                high = root;
-            } else if (root < 0 && root > low) {
-                low = root;
-            }
-        }
-        this.strainLow = low;
-        this.strainHigh = high;
-        double atLow = offset + readingAt(low);
-        double atHigh = offset + readingAt(high);
-        this.ratioLow = rootSign > 0 ? atLow : atHigh;
-        this.ratioHigh = rootSign > 0 ? atHigh : atLow;
-    }
-
-    /**
-     * The exact coefficients {N0, N1, N2, D0, D1, D2} of r(ε) = N(ε)/D(ε) for these arms and
-     * leads, not normalised. With Ri = R0i + Li + Ai·ε (Li the lead in series with arm i,
-     * Ai = R0i·Ki·mi), S12 = R1 + R2, S34 = R3 + R4 and Le the two excitation leads together:
-     * <pre>
-     *   N = R1·R3 − R2·R4
-     *   D = S12·S34 + Le·(S12 + S34)
-     * </pre>
-     * The second term of D is the excitation lost in the leads: the bridge, of input resistance
-     * S12·S34/(S12 + S34), sees Vex reduced by the factor Rb/(Rb + Le).
-     */
-    private static BigDecimal[] expand(BridgeArm[] arms, double[] armLeads,
-            double excitationLeads) {
-        BigDecimal[] r = new BigDecimal[4];
-        BigDecimal[] a = new BigDecimal[4];
-        for (int i = 0; i < 4; i++) {
-            BridgeArm arm = arms[i];
-            BigDecimal nominal = new BigDecimal(arm.nominalResistance().toOhms());
-            r[i] = nominal.add(new BigDecimal(armLeads[i]));
-            a[i] = nominal.multiply(new BigDecimal(arm.effectiveGaugeFactor()))
-                    .multiply(new BigDecimal(arm.strainMultiple()));
-        }
-        BigDecimal le = new BigDecimal(excitationLeads);
-        BigDecimal s12 = r[0].add(r[1]);
-        BigDecimal s34 = r[2].add(r[3]);
-        BigDecimal b12 = a[0].add(a[1]);
-        BigDecimal b34 = a[2].add(a[3]);
-        return new BigDecimal[] {
-            r[0].multiply(r[2]).subtract(r[1].multiply(r[3])),
-            r[0].multiply(a[2]).add(a[0].multiply(r[2]))
-                    .subtract(r[1].multiply(a[3])).subtract(a[1].multiply(r[3])),
-            a[0].multiply(a[2]).subtract(a[1].multiply(a[3])),
-            s12.multiply(s34).add(le.multiply(s12.add(s34))),
-            s12.multiply(b34).add(b12.multiply(s34)).add(le.multiply(b12.add(b34))),
-            b12.multiply(b34)};
-    }
-
-    /** dr/dε at ε = 0 from the coefficients of {@link #expand}: (N1·D0 − N0·D1)/D0². */
-    private static BigDecimal slopeOf(BigDecimal[] c) {
-        return c[1].multiply(c[3]).subtract(c[0].multiply(c[4]))
-                .divide(c[3].multiply(c[3]), EXACT_ENOUGH);
-    }
-
-    /** The real roots of a·x² + b·x + c, by the cancellation-free form; none if a = b = 0. */
-    private static double[] realRoots(double a, double b, double c) {
-        if (a == 0) {
-            return b == 0 ? new double[0] : new double[] {-c / b};
-        }
-        double discriminant = b * b - 4 * a * c;
-        if (!(discriminant >= 0)) {
-            return new double[0];
-        }
-        double q = -0.5 * (b + Math.copySign(Math.sqrt(discriminant), b));
-        return q == 0 ? new double[] {0.0} : new double[] {q / a, c / q};
-    }
-
-    /**
-     * The reading (without the offset) at {@code strain}, an end of the physical range, from
-     * the two dividers and the excitation lost in the leads, taking the limit where a divider's
-     * gauges vanish together.
-     */
-    private double readingAt(double strain) {
-        BigDecimal e = new BigDecimal(strain);
-        BigDecimal[] r = new BigDecimal[4];
-        BigDecimal[] rest = new BigDecimal[4];
-        for (int i = 0; i < 4; i++) {
-            BridgeArm arm = arms[i];
-            BigDecimal nominal = new BigDecimal(arm.nominalResistance().toOhms());
-            BigDecimal a = nominal.multiply(new BigDecimal(arm.effectiveGaugeFactor()))
-                    .multiply(new BigDecimal(arm.strainMultiple()));
-            BigDecimal lead = new BigDecimal(armLeads[i]);
-            r[i] = nominal.add(a.multiply(e)).max(BigDecimal.ZERO).add(lead);
-            rest[i] = nominal.add(lead);
-        }
-        BigDecimal s12 = r[0].add(r[1]);
-        BigDecimal s34 = r[2].add(r[3]);
-        BigDecimal divider12 = s12.signum() == 0
-                ? rest[0].divide(rest[0].add(rest[1]), EXACT_ENOUGH)
-                : r[0].divide(s12, EXACT_ENOUGH);
-        BigDecimal divider43 = s34.signum() == 0
-                ? rest[3].divide(rest[2].add(rest[3]), EXACT_ENOUGH)
-                : r[3].divide(s34, EXACT_ENOUGH);
-        BigDecimal reading = divider12.subtract(divider43);
-        if (excitationLeads != 0) {
-            BigDecimal sum = s12.add(s34);
-            BigDecimal input = sum.signum() == 0 ? BigDecimal.ZERO
-                    : s12.multiply(s34).divide(sum, EXACT_ENOUGH);
-            reading = reading.multiply(input)
-                    .divide(input.add(new BigDecimal(excitationLeads)), EXACT_ENOUGH);
-        }
-        return reading.doubleValue();
+        this.equation = new BridgeEquation(arms, armLeads, excitationLeads, offset);
+        double[] bare = BridgeEquation.zeroAndSlope(arms, NO_LEADS, 0.0);
+        this.zeroWithoutLeads = bare[0];
+        this.slopeWithoutLeads = bare[1];
+        this.loops = new BridgeLoops(equation);
+        this.codeLoops = new CodeLoops(equation);
     }
 
     // ---------------------------------------------------------------- factories
@@ -474,15 +292,16 @@ public final class Bridge implements Serializable {
     public Bridge zeroedByOffset(VoltageRatio initialReading) {
         Objects.requireNonNull(initialReading, "initialReading");
         double reading = initialReading.toVoltsPerVolt();
-        if (!(reading > ratioLow - offset && reading < ratioHigh - offset)) {
+        double low = equation.ratioLow - offset;
+        double high = equation.ratioHigh - offset;
+        if (!(reading > low && reading < high)) {
             throw new IllegalArgumentException("initialReading must be in the physical output "
-                    + "range (" + VoltageRatio.ofVoltsPerVolt(ratioLow - offset) + ", "
-                    + VoltageRatio.ofVoltsPerVolt(ratioHigh - offset) + ") of the unzeroed bridge: "
+                    + "range (" + VoltageRatio.ofVoltsPerVolt(low) + ", "
+                    + VoltageRatio.ofVoltsPerVolt(high) + ") of the unzeroed bridge: "
                     + initialReading);
         }
-        BigDecimal[] c = expand(arms, armLeads, excitationLeads);
-        double shift = new BigDecimal(reading).subtract(c[0].divide(c[3], EXACT_ENOUGH))
-                .doubleValue();
+        double shift = new BigDecimal(reading).subtract(
+                BridgeEquation.exactZeroOutput(arms, armLeads, excitationLeads)).doubleValue();
         return new Bridge(arrangement, arms, armLeads, excitationLeads, shift);
     }
 
@@ -517,7 +336,7 @@ public final class Bridge implements Serializable {
         BigDecimal denominator = at1[0].subtract(at0[0])
                 .subtract(target.multiply(at1[1].subtract(at0[1])));
         double ohms = denominator.signum() == 0 ? Double.NaN
-                : numerator.divide(denominator, EXACT_ENOUGH).doubleValue();
+                : numerator.divide(denominator, BridgeEquation.EXACT_ENOUGH).doubleValue();
         if (!(ohms > 0) || Double.isInfinite(ohms)) {
             throw new IllegalArgumentException("initialReading cannot be explained by arm " + arm
                     + " with a positive resistance: " + initialReading);
@@ -653,7 +472,7 @@ public final class Bridge implements Serializable {
      * equations already include it; this figure is for the channel sheet.
      */
     public double leadDesensitisation() {
-        return slope / slopeWithoutLeads;
+        return equation.slope / slopeWithoutLeads;
     }
 
     /**
@@ -661,7 +480,7 @@ public final class Bridge implements Serializable {
      * the same arms without leads, before any zeroing.
      */
     public VoltageRatio leadZeroOffset() {
-        return VoltageRatio.ofVoltsPerVolt(n0 - offset - zeroWithoutLeads);
+        return VoltageRatio.ofVoltsPerVolt(equation.n0 - offset - zeroWithoutLeads);
     }
 
     // ---------------------------------------------------------------- properties
@@ -680,7 +499,7 @@ public final class Bridge implements Serializable {
      * zero strain is zero before any zeroing.
      */
     public boolean isBalanced() {
-        return balanced;
+        return equation.balanced;
     }
 
     /**
@@ -688,12 +507,12 @@ public final class Bridge implements Serializable {
      * arrangements whose two dividers each keep a constant total resistance.
      */
     public boolean isLinear() {
-        return form == Form.LINEAR;
+        return equation.form == BridgeEquation.Form.LINEAR;
     }
 
     /** The output at zero strain, as the instrument reads it (zero after {@link #zeroedByOffset}). */
     public VoltageRatio zeroOutput() {
-        return VoltageRatio.ofVoltsPerVolt(n0);
+        return VoltageRatio.ofVoltsPerVolt(equation.n0);
     }
 
     /**
@@ -701,7 +520,7 @@ public final class Bridge implements Serializable {
      * arms of gauge factor K (0.5 mV/V per 1000 µε for a quarter bridge at K = 2).
      */
     public VoltageRatio sensitivity() {
-        return VoltageRatio.ofVoltsPerVolt(slope * 1e-3);
+        return VoltageRatio.ofVoltsPerVolt(equation.slope * 1e-3);
     }
 
     /**
@@ -723,17 +542,17 @@ public final class Bridge implements Serializable {
      * Negative when tension gives a negative output.
      */
     public double bridgeFactor() {
-        return 4 * slope / gaugeFactor();
+        return 4 * equation.slope / gaugeFactor();
     }
 
     /** The lower end of the open interval of physical strains (m/m), for tests. */
     double strainLow() {
-        return strainLow;
+        return equation.strainLow;
     }
 
     /** The upper end of the open interval of physical strains (m/m), for tests. */
     double strainHigh() {
-        return strainHigh;
+        return equation.strainHigh;
     }
 
     // ---------------------------------------------------------------- excitation
@@ -872,7 +691,7 @@ public final class Bridge implements Serializable {
      */
     public Strain linearisedStrainAt(VoltageRatio ratio) {
         Objects.requireNonNull(ratio, "ratio");
-        return Strain.of((ratio.toVoltsPerVolt() - n0) / slope);
+        return Strain.of((ratio.toVoltsPerVolt() - equation.n0) / equation.slope);
     }
 
     /**
@@ -891,12 +710,14 @@ public final class Bridge implements Serializable {
     public double nonlinearityError(Strain strain) {
         Objects.requireNonNull(strain, "strain");
         double e = strain.value();
-        if (!(e > strainLow && e < strainHigh)) {
+        if (!(e > equation.strainLow && e < equation.strainHigh)) {
             throw new IllegalArgumentException("strain must be in the physical range "
                     + strainRangeText() + " of this bridge: " + strain);
         }
-        double p2 = n2 - n0 * d2;
-        return e * (p2 - slope * d1 - slope * d2 * e) / (slope * (1 + e * (d1 + e * d2)));
+        BridgeEquation q = equation;
+        double p2 = q.n2 - q.n0 * q.d2;
+        return e * (p2 - q.slope * q.d1 - q.slope * q.d2 * e)
+                / (q.slope * (1 + e * (q.d1 + e * q.d2)));
     }
 
     // ---------------------------------------------------------------- kernels
@@ -907,7 +728,7 @@ public final class Bridge implements Serializable {
      * method {@link #toRatio(double[], int, double[], int, int)}, bit for bit. Never throws.
      */
     public double toRatio(double strain) {
-        return forward(strain, n0, n1, n2, d1, d2, strainLow, strainHigh);
+        return equation.toRatio(strain);
     }
 
     /**
@@ -916,25 +737,42 @@ public final class Bridge implements Serializable {
      * {@link #toStrain(double[], int, double[], int, int)}, bit for bit. Never throws.
      */
     public double toStrain(double ratio) {
-        switch (form) {
-            case LINEAR:
-                return inverseLinear(ratio, n0, n1, ratioLow, ratioHigh);
-            case FIRST_DEGREE:
-                return inverseFirstDegree(ratio, n0, n1, d1, ratioLow, ratioHigh);
-            default:
-                return inverseQuadratic(ratio, n0, n1, n2, d1, d2, rootSign, ratioLow,
-                        ratioHigh);
-        }
+        return equation.toStrain(ratio);
+    }
+
+    /** The strain of a channel's reading r: the plain quotient × factor, NaN outside (low, high). */
+    double channelStrain(double r, double low, double high, double factor) {
+        return equation.channelStrain(r, low, high, factor);
+    }
+
+    /** Whether the plain quotient is regular on [lo, hi] (see {@link BridgeEquation}). */
+    boolean regularOn(double lo, double hi) {
+        return equation.regularOn(lo, hi);
+    }
+
+    /** The bridge equation, for the channels of this package. */
+    BridgeEquation equation() {
+        return equation;
+    }
+
+    /** The loops over double arrays, for the channels of this package. */
+    BridgeLoops loops() {
+        return loops;
+    }
+
+    /** The loops over converter codes, for the channels of this package. */
+    CodeLoops codeLoops() {
+        return codeLoops;
     }
 
     /** The lower end of the open interval of physical readings (V/V). */
     double ratioLow() {
-        return ratioLow;
+        return equation.ratioLow;
     }
 
     /** The upper end of the open interval of physical readings (V/V). */
     double ratioHigh() {
-        return ratioHigh;
+        return equation.ratioHigh;
     }
 
     /**
@@ -960,649 +798,11 @@ public final class Bridge implements Serializable {
     int toStrain(double[] src, int srcOff, double[] dst, int dstOff, int len,
             boolean probeInLoop) {
         Checks.block(src, srcOff, dst, dstOff, len);
-        double[] from = Kernels.sameIndexSource(src, srcOff, dst, dstOff, len);
-        int nan = 0;
-        for (int done = 0; done < len; done += Kernels.CHUNK) {
-            int start = dstOff + done;
-            int stop = start + Math.min(Kernels.CHUNK, len - done);
-            if (probeInLoop && stop - start >= Kernels.REDUCTION_MIN_LENGTH) {
-                double probe = toStrainProbed(from, dst, start, stop, ratioLow, ratioHigh);
-                nan += probe == 0 ? 0 : Kernels.countNaN(dst, start, stop - start);
-            } else {
-                toStrainWithin(from, dst, start, stop, ratioLow, ratioHigh);
-                nan += Kernels.countNaN(dst, start, stop - start);
-            }
-        }
-        return nan;
-    }
-
-    /**
-     * As {@link #toStrainWithin}, and returns the least of ε·0 over the chunk: 0 when every
-     * output is finite, NaN otherwise ({@link Kernels#REDUCTIONS_IN_LOOP}).
-     */
-    private double toStrainProbed(double[] from, double[] dst, int start, int end, double low,
-            double high) {
-        switch (form) {
-            case LINEAR:
-                return inverseLinearProbed(from, dst, start, end, low, high);
-            case FIRST_DEGREE:
-                return inverseFirstDegreeProbed(from, dst, start, end, low, high);
-            default:
-                return inverseQuadraticProbed(from, dst, start, end, low, high);
-        }
-    }
-
-    /**
-     * Converts from[start, end) into dst[start, end) with the reading interval (low, high): the
-     * loop of {@link #toStrain(double[], int, double[], int, int)}.
-     */
-    private void toStrainWithin(double[] from, double[] dst, int start, int end, double low,
-            double high) {
-        switch (form) {
-            case LINEAR:
-                inverseLinearBlock(from, dst, start, end, low, high);
-                break;
-            case FIRST_DEGREE:
-                inverseFirstDegreeBlock(from, dst, start, end, low, high);
-                break;
-            default:
-                inverseQuadraticBlock(from, dst, start, end, low, high);
-                break;
-        }
+        return loops.toStrain(Kernels.sameIndexSource(src, srcOff, dst, dstOff, len), dst,
+                dstOff, len, probeInLoop);
     }
 
     // ---------------------------------------------------------------- channel inverses
-    //
-    // A channel evaluates the inverse without the arithmetic mask, as the plain quotient
-    //   ε = (r − n0)/n1,  (r − n0)/(n1 − r·d1)  or  2·(r − n0)/(b + s·√Δ),
-    // times the channel's factor, and multiplies it by mask/mask, which is exactly 1 inside the
-    // reading interval and NaN outside (0/0). Where a chunk of codes is proven to lie inside an
-    // interval on which the quotient is regular (regularOn), the factor 1 is left out: the
-    // plain loop then costs one division per sample, and its bits are the same.
-
-    /** The strain of a channel's reading r: the plain quotient × factor, NaN outside (low, high). */
-    double channelStrain(double r, double low, double high, double factor) {
-        return plain(r) * factor * unity(r, low, high);
-    }
-
-    private double plain(double r) {
-        switch (form) {
-            case LINEAR:
-                return plainLinear(r, n0, n1);
-            case FIRST_DEGREE:
-                return plainFirstDegree(r, n0, n1, d1);
-            default:
-                return plainQuadratic(r, n0, n1, n2, d1, d2, rootSign);
-        }
-    }
-
-    /**
-     * Whether the plain quotient is finite, and free of NaN, for every reading in [lo, hi], with
-     * a wide margin over rounding: its denominator keeps one sign and stays away from zero
-     * relative to the size of its terms, and, for the quadratic form, the discriminant stays
-     * positive by the same margin. Each of these is affine or quadratic in r, so its ends (and
-     * the vertex of the discriminant) bound it on the whole interval.
-     */
-    boolean regularOn(double lo, double hi) {
-        if (!(lo <= hi) || !Double.isFinite(lo) || !Double.isFinite(hi)) {
-            return false;
-        }
-        final double margin = 1e-9;
-        switch (form) {
-            case LINEAR:
-                return true;
-            case FIRST_DEGREE:
-                return awayFromZero(n1, d1, lo, hi, margin);
-            default:
-                return awayFromZero(n1 * rootSign, d1 * rootSign, lo, hi, margin)
-                        && discriminantPositive(lo, hi, margin);
-        }
-    }
-
-    /** Whether c − r·k is positive at both ends, by margin × (|c| + |r·k|). */
-    private static boolean awayFromZero(double c, double k, double lo, double hi,
-            double margin) {
-        return c - lo * k > margin * (Math.abs(c) + Math.abs(lo * k))
-                && c - hi * k > margin * (Math.abs(c) + Math.abs(hi * k));
-    }
-
-    /**
-     * Whether Δ(r) = b² + 4·a·(r − n0), a quadratic in r, exceeds margin × the size of its
-     * terms on [lo, hi]: checked at both ends and at its vertex when that lies inside.
-     */
-    private boolean discriminantPositive(double lo, double hi, double margin) {
-        double size = Math.max(discriminantTerms(lo), discriminantTerms(hi));
-        double curvature = d1 * d1 - 4 * d2;
-        double lowest = Math.min(discriminant(lo), discriminant(hi));
-        if (curvature > 0) {
-            double vertex = (2 * n1 * d1 - 4 * n2 - 4 * d2 * n0) / (2 * curvature);
-            if (vertex > lo && vertex < hi) {
-                lowest = Math.min(lowest, discriminant(vertex));
-            }
-        }
-        return lowest > margin * size;
-    }
-
-    private double discriminant(double r) {
-        double b = n1 - r * d1;
-        double a = n2 - r * d2;
-        return b * b + 4.0 * a * (r - n0);
-    }
-
-    private double discriminantTerms(double r) {
-        double b = Math.abs(n1) + Math.abs(r * d1);
-        return b * b + 4.0 * (Math.abs(n2) + Math.abs(r * d2)) * (Math.abs(r) + Math.abs(n0));
-    }
-
-    /**
-     * Converts codes[start + shift, end + shift) into strains in dst[start, end) in one loop,
-     * plain(code·scale + offset)·factor per sample: for chunks whose codes regularOn has proven
-     * inside the reading interval. An {@code int[]} cannot alias the output, so the two
-     * indices do not stop C2 from vectorising the loop.
-     */
-    void codesToStrainPlain(int[] codes, int shift, double scale, double offset, double[] dst,
-            int start, int end, double factor) {
-        switch (form) {
-            case LINEAR:
-                codesLinearPlain(codes, shift, scale, offset, dst, start, end, factor);
-                break;
-            case FIRST_DEGREE:
-                codesFirstDegreePlain(codes, shift, scale, offset, dst, start, end, factor);
-                break;
-            default:
-                codesQuadraticPlain(codes, shift, scale, offset, dst, start, end, factor);
-                break;
-        }
-    }
-
-    /**
-     * As {@link #codesToStrainPlain}, less the thermal output of the temperature of each sample,
-     * t = celsius[i] (which may be dst itself: each t is read before dst[i] is written), in one
-     * loop: plain(code·scale + offset)·factor − q(t). Returns whether every t was finite; if
-     * so, the results equal {@code thermal.correct(plain·factor, t)} bit for bit.
-     */
-    boolean codesToStrainLessThermal(int[] codes, int shift, double scale, double offset,
-            double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
-        switch (form) {
-            case LINEAR:
-                return codesLinearLessThermal(codes, shift, scale, offset, celsius, dst, start,
-                        end, factor, thermal);
-            case FIRST_DEGREE:
-                return codesFirstDegreeLessThermal(codes, shift, scale, offset, celsius, dst,
-                        start, end, factor, thermal);
-            default:
-                return codesQuadraticLessThermal(codes, shift, scale, offset, celsius, dst, start,
-                        end, factor, thermal);
-        }
-    }
-
-    /** What a fused thermal loop found: a code outside the bounds (the chunk is to be redone). */
-    static final int CODES_OUTSIDE = 0;
-    /** What a fused thermal loop found: codes within the bounds, every temperature finite. */
-    static final int PROVEN = 1;
-    /** What a fused thermal loop found: codes within the bounds, a temperature not finite. */
-    static final int PROVEN_NON_FINITE_TEMPERATURE = 2;
-
-    /**
-     * As {@link #codesToStrainLessThermal}, for codes not yet proven: the loop also takes the
-     * least and greatest code ({@link Kernels#REDUCTIONS_IN_LOOP}; on JDK 17 this loop ran at
-     * 0.67 × the proof pass and the loop without them). Returns {@link #CODES_OUTSIDE} if a
-     * code lies outside [low, high] (the outputs are then to be recomputed by the checked
-     * path), else {@link #PROVEN} or {@link #PROVEN_NON_FINITE_TEMPERATURE}. For
-     * {@link #PROVEN}, the results equal {@code thermal.correct(plain·factor, t)} bit for bit.
-     */
-    int codesToStrainLessThermalWithin(int[] codes, int shift, double scale, double offset,
-            double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal, int low, int high) {
-        switch (form) {
-            case LINEAR:
-                return codesLinearLessThermalWithin(codes, shift, scale, offset, celsius, dst,
-                        start, end, factor, thermal, low, high);
-            case FIRST_DEGREE:
-                return codesFirstDegreeLessThermalWithin(codes, shift, scale, offset, celsius, dst,
-                        start, end, factor, thermal, low, high);
-            default:
-                return codesQuadraticLessThermalWithin(codes, shift, scale, offset, celsius,
-                        dst, start, end, factor, thermal, low, high);
-        }
-    }
-
-    /**
-     * As {@link #codesToStrainPlain}, taking the least and greatest code in the same loop:
-     * whether every code lay within [low, high]. If not, the outputs are to be recomputed by
-     * the checked path. For JVMs whose C2 keeps the min and max reductions in the vectorised
-     * loop ({@link Kernels#REDUCTIONS_IN_LOOP}); it saves the pass over the codes.
-     */
-    boolean codesToStrainPlainWithin(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor, int low, int high) {
-        switch (form) {
-            case LINEAR:
-                return codesLinearPlainWithin(codes, shift, scale, offset, dst, start, end,
-                        factor, low, high);
-            case FIRST_DEGREE:
-                return codesFirstDegreePlainWithin(codes, shift, scale, offset, dst, start, end,
-                        factor, low, high);
-            default:
-                return codesQuadraticPlainWithin(codes, shift, scale, offset, dst, start, end,
-                        factor, low, high);
-        }
-    }
-
-    /**
-     * Converts the readings dst[start, end) into strains in place: plain(r)·factor, times
-     * unity(r) unless {@code proven} (the readings are known to lie inside the interval).
-     */
-    void readingsToStrain(double[] dst, int start, int end, double low, double high,
-            double factor, boolean proven) {
-        switch (form) {
-            case LINEAR:
-                if (proven) {
-                    linearPlain(dst, start, end, factor);
-                } else {
-                    linearChecked(dst, start, end, low, high, factor);
-                }
-                break;
-            case FIRST_DEGREE:
-                if (proven) {
-                    firstDegreePlain(dst, start, end, factor);
-                } else {
-                    firstDegreeChecked(dst, start, end, low, high, factor);
-                }
-                break;
-            default:
-                if (proven) {
-                    quadraticPlain(dst, start, end, factor);
-                } else {
-                    quadraticChecked(dst, start, end, low, high, factor);
-                }
-                break;
-        }
-    }
-
-    // Blocks run in chunks of Kernels.CHUNK samples, so that the NaN count reads what the loop
-    // has just written while it is still in cache. One small method per loop, each reading and
-    // writing double arrays at one index, so that C2 compiles and vectorises each loop on its
-    // own.
-
-    private void inverseLinearBlock(double[] from, double[] dst, int start, int end,
-            double low, double high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        for (int i = start; i < end; i++) {
-            dst[i] = inverseLinear(from[i], c0, c1, low, high);
-        }
-    }
-
-    private void inverseFirstDegreeBlock(double[] from, double[] dst, int start, int end,
-            double low, double high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        for (int i = start; i < end; i++) {
-            dst[i] = inverseFirstDegree(from[i], c0, c1, e1, low, high);
-        }
-    }
-
-    private void inverseQuadraticBlock(double[] from, double[] dst, int start, int end,
-            double low, double high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        for (int i = start; i < end; i++) {
-            dst[i] = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
-        }
-    }
-
-    private double inverseLinearProbed(double[] from, double[] dst, int start, int end,
-            double low, double high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        double probe = 0;
-        for (int i = start; i < end; i++) {
-            double e = inverseLinear(from[i], c0, c1, low, high);
-            dst[i] = e;
-            probe = Math.min(probe, e * 0.0);
-        }
-        return probe;
-    }
-
-    private double inverseFirstDegreeProbed(double[] from, double[] dst, int start, int end,
-            double low, double high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        double probe = 0;
-        for (int i = start; i < end; i++) {
-            double e = inverseFirstDegree(from[i], c0, c1, e1, low, high);
-            dst[i] = e;
-            probe = Math.min(probe, e * 0.0);
-        }
-        return probe;
-    }
-
-    private double inverseQuadraticProbed(double[] from, double[] dst, int start, int end,
-            double low, double high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        double probe = 0;
-        for (int i = start; i < end; i++) {
-            double e = inverseQuadratic(from[i], c0, c1, c2, e1, e2, sign, low, high);
-            dst[i] = e;
-            probe = Math.min(probe, e * 0.0);
-        }
-        return probe;
-    }
-
-    private static int thermalStatus(int min, int max, int low, int high, int finite) {
-        if (min < low || max > high) {
-            return CODES_OUTSIDE;
-        }
-        return finite == 1 ? PROVEN : PROVEN_NON_FINITE_TEMPERATURE;
-    }
-
-    private void codesLinearPlain(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        for (int i = start; i < end; i++) {
-            dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor;
-        }
-    }
-
-    private boolean codesLinearPlainWithin(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor, int low, int high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        int min = Integer.MAX_VALUE;
-        int max = Integer.MIN_VALUE;
-        for (int i = start; i < end; i++) {
-            int code = codes[i + shift];
-            min = Math.min(min, code);
-            max = Math.max(max, code);
-            dst[i] = plainLinear(code * scale + offset, c0, c1) * factor;
-        }
-        return min >= low && max <= high;
-    }
-
-    private void codesFirstDegreePlain(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        for (int i = start; i < end; i++) {
-            dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor;
-        }
-    }
-
-    private boolean codesFirstDegreePlainWithin(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor, int low, int high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        int min = Integer.MAX_VALUE;
-        int max = Integer.MIN_VALUE;
-        for (int i = start; i < end; i++) {
-            int code = codes[i + shift];
-            min = Math.min(min, code);
-            max = Math.max(max, code);
-            dst[i] = plainFirstDegree(code * scale + offset, c0, c1, e1) * factor;
-        }
-        return min >= low && max <= high;
-    }
-
-    private void codesQuadraticPlain(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        for (int i = start; i < end; i++) {
-            dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
-                    * factor;
-        }
-    }
-
-    private boolean codesQuadraticPlainWithin(int[] codes, int shift, double scale, double offset,
-            double[] dst, int start, int end, double factor, int low, int high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        int min = Integer.MAX_VALUE;
-        int max = Integer.MIN_VALUE;
-        for (int i = start; i < end; i++) {
-            int code = codes[i + shift];
-            min = Math.min(min, code);
-            max = Math.max(max, code);
-            dst[i] = plainQuadratic(code * scale + offset, c0, c1, c2, e1, e2, sign)
-                    * factor;
-        }
-        return min >= low && max <= high;
-    }
-
-    // The thermal output q(t) is ThermalOutput.Correction.polynomial, the expression that the
-    // scalar path evaluates too, so that both give the same bits.
-
-    private boolean codesLinearLessThermal(int[] codes, int shift, double scale, double offset,
-            double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double p0 = thermal.coefficient(0);
-        final double p1 = thermal.coefficient(1);
-        final double p2 = thermal.coefficient(2);
-        final double p3 = thermal.coefficient(3);
-        final double p4 = thermal.coefficient(4);
-        int finite = 1;
-        for (int i = start; i < end; i++) {
-            double t = celsius[i];
-            finite &= Kernels.finiteBit(t);
-            dst[i] = plainLinear(codes[i + shift] * scale + offset, c0, c1) * factor
-                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
-        }
-        return finite == 1;
-    }
-
-    private boolean codesFirstDegreeLessThermal(int[] codes, int shift, double scale,
-            double offset, double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        final double p0 = thermal.coefficient(0);
-        final double p1 = thermal.coefficient(1);
-        final double p2 = thermal.coefficient(2);
-        final double p3 = thermal.coefficient(3);
-        final double p4 = thermal.coefficient(4);
-        int finite = 1;
-        for (int i = start; i < end; i++) {
-            double t = celsius[i];
-            finite &= Kernels.finiteBit(t);
-            dst[i] = plainFirstDegree(codes[i + shift] * scale + offset, c0, c1, e1) * factor
-                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
-        }
-        return finite == 1;
-    }
-
-    private boolean codesQuadraticLessThermal(int[] codes, int shift, double scale,
-            double offset, double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        final double p0 = thermal.coefficient(0);
-        final double p1 = thermal.coefficient(1);
-        final double p2 = thermal.coefficient(2);
-        final double p3 = thermal.coefficient(3);
-        final double p4 = thermal.coefficient(4);
-        int finite = 1;
-        for (int i = start; i < end; i++) {
-            double t = celsius[i];
-            finite &= Kernels.finiteBit(t);
-            dst[i] = plainQuadratic(codes[i + shift] * scale + offset, c0, c1, c2, e1, e2, sign)
-                    * factor - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
-        }
-        return finite == 1;
-    }
-
-    private int codesLinearLessThermalWithin(int[] codes, int shift, double scale, double offset,
-            double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal, int low, int high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double p0 = thermal.coefficient(0);
-        final double p1 = thermal.coefficient(1);
-        final double p2 = thermal.coefficient(2);
-        final double p3 = thermal.coefficient(3);
-        final double p4 = thermal.coefficient(4);
-        int finite = 1;
-        int min = Integer.MAX_VALUE;
-        int max = Integer.MIN_VALUE;
-        for (int i = start; i < end; i++) {
-            double t = celsius[i];
-            int code = codes[i + shift];
-            min = Math.min(min, code);
-            max = Math.max(max, code);
-            finite &= Kernels.finiteBit(t);
-            dst[i] = plainLinear(code * scale + offset, c0, c1) * factor
-                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
-        }
-        return thermalStatus(min, max, low, high, finite);
-    }
-
-    private int codesFirstDegreeLessThermalWithin(int[] codes, int shift, double scale,
-            double offset, double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal, int low, int high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        final double p0 = thermal.coefficient(0);
-        final double p1 = thermal.coefficient(1);
-        final double p2 = thermal.coefficient(2);
-        final double p3 = thermal.coefficient(3);
-        final double p4 = thermal.coefficient(4);
-        int finite = 1;
-        int min = Integer.MAX_VALUE;
-        int max = Integer.MIN_VALUE;
-        for (int i = start; i < end; i++) {
-            double t = celsius[i];
-            int code = codes[i + shift];
-            min = Math.min(min, code);
-            max = Math.max(max, code);
-            finite &= Kernels.finiteBit(t);
-            dst[i] = plainFirstDegree(code * scale + offset, c0, c1, e1) * factor
-                    - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
-        }
-        return thermalStatus(min, max, low, high, finite);
-    }
-
-    private int codesQuadraticLessThermalWithin(int[] codes, int shift, double scale,
-            double offset, double[] celsius, double[] dst, int start, int end, double factor,
-            ThermalOutput.Correction thermal, int low, int high) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        final double p0 = thermal.coefficient(0);
-        final double p1 = thermal.coefficient(1);
-        final double p2 = thermal.coefficient(2);
-        final double p3 = thermal.coefficient(3);
-        final double p4 = thermal.coefficient(4);
-        int finite = 1;
-        int min = Integer.MAX_VALUE;
-        int max = Integer.MIN_VALUE;
-        for (int i = start; i < end; i++) {
-            double t = celsius[i];
-            int code = codes[i + shift];
-            min = Math.min(min, code);
-            max = Math.max(max, code);
-            finite &= Kernels.finiteBit(t);
-            dst[i] = plainQuadratic(code * scale + offset, c0, c1, c2, e1, e2, sign)
-                    * factor - ThermalOutput.Correction.polynomial(t, p0, p1, p2, p3, p4);
-        }
-        return thermalStatus(min, max, low, high, finite);
-    }
-
-    private void linearPlain(double[] dst, int start, int end, double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        for (int i = start; i < end; i++) {
-            dst[i] = plainLinear(dst[i], c0, c1) * factor;
-        }
-    }
-
-    private void linearChecked(double[] dst, int start, int end, double low, double high,
-            double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        for (int i = start; i < end; i++) {
-            double r = dst[i];
-            dst[i] = plainLinear(r, c0, c1) * factor * unity(r, low, high);
-        }
-    }
-
-    private void firstDegreePlain(double[] dst, int start, int end, double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        for (int i = start; i < end; i++) {
-            dst[i] = plainFirstDegree(dst[i], c0, c1, e1) * factor;
-        }
-    }
-
-    private void firstDegreeChecked(double[] dst, int start, int end, double low, double high,
-            double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double e1 = d1;
-        for (int i = start; i < end; i++) {
-            double r = dst[i];
-            dst[i] = plainFirstDegree(r, c0, c1, e1) * factor * unity(r, low, high);
-        }
-    }
-
-    private void quadraticPlain(double[] dst, int start, int end, double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        for (int i = start; i < end; i++) {
-            dst[i] = plainQuadratic(dst[i], c0, c1, c2, e1, e2, sign) * factor;
-        }
-    }
-
-    private void quadraticChecked(double[] dst, int start, int end, double low, double high,
-            double factor) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double sign = rootSign;
-        for (int i = start; i < end; i++) {
-            double r = dst[i];
-            dst[i] = plainQuadratic(r, c0, c1, c2, e1, e2, sign) * factor * unity(r, low, high);
-        }
-    }
 
     /**
      * Converts {@code len} strains (m/m) from {@code src[srcOff...]} to output ratios (V/V) in
@@ -1616,106 +816,23 @@ public final class Bridge implements Serializable {
      */
     public int toRatio(double[] src, int srcOff, double[] dst, int dstOff, int len) {
         Checks.block(src, srcOff, dst, dstOff, len);
-        double[] from = Kernels.sameIndexSource(src, srcOff, dst, dstOff, len);
-        int nan = 0;
-        for (int done = 0; done < len; done += Kernels.CHUNK) {
-            int start = dstOff + done;
-            int stop = start + Math.min(Kernels.CHUNK, len - done);
-            forwardBlock(from, dst, start, stop);
-            nan += Kernels.countNaN(dst, start, stop - start);
-        }
-        return nan;
-    }
-
-    private void forwardBlock(double[] from, double[] dst, int start, int end) {
-        final double c0 = n0;
-        final double c1 = n1;
-        final double c2 = n2;
-        final double e1 = d1;
-        final double e2 = d2;
-        final double low = strainLow;
-        final double high = strainHigh;
-        for (int i = start; i < end; i++) {
-            dst[i] = forward(from[i], c0, c1, c2, e1, e2, low, high);
-        }
-    }
-
-    // The per-sample functions. Domain checks are arithmetic, not branches, so that the loops
-    // above stay vectorised (a conditional, or Math.min and Math.max on JDK 25, slow them down
-    // severalfold). For the open interval (low, high), both ends finite:
-    //   g = (x − low)·(high − x)        > 0 inside, <= 0 outside, NaN for NaN, −∞ for ±∞
-    //   g' = g + |g|                    2g inside, 0 outside, NaN for NaN and ±∞
-    // and the quotient (p·g')/(q·g') is p/q inside and 0/0 = NaN everywhere else.
-
-    private static double mask(double x, double low, double high) {
-        double g = (x - low) * (high - x);
-        return g + Math.abs(g);
-    }
-
-    private static double forward(double e, double n0, double n1, double n2, double d1,
-            double d2, double low, double high) {
-        double g = mask(e, low, high);
-        return ((n0 + e * (n1 + e * n2)) * g) / ((1.0 + e * (d1 + e * d2)) * g);
-    }
-
-    private static double inverseLinear(double r, double n0, double n1, double low,
-            double high) {
-        double g = mask(r, low, high);
-        return ((r - n0) * g) / (n1 * g);
-    }
-
-    private static double inverseFirstDegree(double r, double n0, double n1, double d1,
-            double low, double high) {
-        double g = mask(r, low, high);
-        return ((r - n0) * g) / ((n1 - r * d1) * g);
-    }
-
-    private static double inverseQuadratic(double r, double n0, double n1, double n2,
-            double d1, double d2, double sign, double low, double high) {
-        double g = mask(r, low, high);
-        double minusC = r - n0;
-        double b = n1 - r * d1;
-        double a = n2 - r * d2;
-        double root = Math.sqrt(b * b + 4.0 * a * minusC);
-        return (2.0 * minusC * g) / ((b + sign * root) * g);
-    }
-
-    /** 1 exactly for a reading inside (low, high), NaN outside: g/g with g the mask. */
-    private static double unity(double r, double low, double high) {
-        double g = mask(r, low, high);
-        return g / g;
-    }
-
-    private static double plainLinear(double r, double n0, double n1) {
-        return (r - n0) / n1;
-    }
-
-    private static double plainFirstDegree(double r, double n0, double n1, double d1) {
-        return (r - n0) / (n1 - r * d1);
-    }
-
-    private static double plainQuadratic(double r, double n0, double n1, double n2, double d1,
-            double d2, double sign) {
-        double minusC = r - n0;
-        double b = n1 - r * d1;
-        double a = n2 - r * d2;
-        double root = Math.sqrt(b * b + 4.0 * a * minusC);
-        return 2.0 * minusC / (b + sign * root);
+        return loops.toRatio(Kernels.sameIndexSource(src, srcOff, dst, dstOff, len), dst, dstOff,
+                len);
     }
 
     // ---------------------------------------------------------------- text
 
     private String rangeText() {
-        return "(" + VoltageRatio.ofVoltsPerVolt(ratioLow) + ", "
-                + VoltageRatio.ofVoltsPerVolt(ratioHigh) + ")";
+        return "(" + VoltageRatio.ofVoltsPerVolt(equation.ratioLow) + ", "
+                + VoltageRatio.ofVoltsPerVolt(equation.ratioHigh) + ")";
     }
 
     private String strainRangeText() {
-        return "(" + Format.withUnit(strainLow * 1e6, "µε") + ", "
-                + Format.withUnit(strainHigh * 1e6, "µε") + ")";
+        return "(" + Format.withUnit(equation.strainLow * 1e6, "µε") + ", "
+                + Format.withUnit(equation.strainHigh * 1e6, "µε") + ")";
     }
 
-    private static String armList(BridgeArm[] arms) {
+    static String armList(BridgeArm[] arms) {
         StringBuilder text = new StringBuilder();
         for (int i = 0; i < 4; i++) {
             text.append(i == 0 ? "" : "; ").append("arm ").append(i + 1).append(": ")

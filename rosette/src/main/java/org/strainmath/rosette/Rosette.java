@@ -64,28 +64,36 @@ import org.strainmath.quantity.Strain;
  * stream holds the defining values only, checked again as the factories check them.
  */
 public final class Rosette implements Serializable {
-
     /** Below this ratio of Mohr radius to centre a state is taken as equal-biaxial. */
     static final double EQUAL_BIAXIAL = 1e-12;
 
-    private static final MathContext DIGITS = new MathContext(50);
-    private static final double SAME_DIRECTION = 1e-9;
-
     private final String kind;
+
     private final double[] nominal;        // radians, as numbered
+
     private final double[] measured;       // radians, or null
+
     private final boolean clockwise;
+
     private final double reference;        // radians, reference axis from gauge a's frame
+
     private final StrainGauge[] grids;     // one per gauge, or null
+
     private final IsotropicMaterial material;  // or null
+
     private final boolean tee;
 
     // Composed: (C, D, H) = rows · readings; E/(1 − ν²) and ν when there is a material.
     private final double[] rowC;
+
     private final double[] rowD;
+
     private final double[] rowH;
+
     private final double stiffness;
+
     private final double poisson;
+
     private final double[][] model;        // n × 3: readings = model · (C, D, H)
 
     private Rosette(String kind, double[] nominal, double[] measured, boolean clockwise,
@@ -99,29 +107,11 @@ public final class Rosette implements Serializable {
         this.material = material;
         this.tee = tee;
 
-        double[] theta = effectiveAngles();
-        int n = theta.length;
-        checkDirections(theta);
-        BigDecimal[][] exact = new BigDecimal[n][3];
-        this.model = new double[n][3];
-        for (int j = 0; j < n; j++) {
-            double kt = grids == null ? 0 : grids[j].transverseSensitivity();
-            double nu0 = grids == null ? 0 : grids[j].calibrationPoissonRatio();
-            BigDecimal k = new BigDecimal(kt);
-            BigDecimal scale = BigDecimal.ONE.subtract(new BigDecimal(nu0).multiply(k));
-            BigDecimal[] cs = cosSinOfTwice(theta[j]);
-            BigDecimal across = BigDecimal.ONE.subtract(k);
-            exact[j][0] = BigDecimal.ONE.add(k).divide(scale, DIGITS);
-            exact[j][1] = across.multiply(cs[0]).divide(scale, DIGITS);
-            exact[j][2] = across.multiply(cs[1]).divide(scale, DIGITS);
-            for (int c = 0; c < 3; c++) {
-                model[j][c] = exact[j][c].doubleValue();
-            }
-        }
-        double[][] rows = reduction(exact, tee ? cosSinOfTwice(theta[0]) : null, theta);
-        this.rowC = rows[0];
-        this.rowD = rows[1];
-        this.rowH = rows[2];
+        RosetteReduction reduction = new RosetteReduction(effectiveAngles(), grids, tee);
+        this.model = reduction.model;
+        this.rowC = reduction.rowC;
+        this.rowD = reduction.rowD;
+        this.rowH = reduction.rowH;
         if (material == null) {
             stiffness = Double.NaN;
             poisson = Double.NaN;
@@ -326,116 +316,12 @@ public final class Rosette implements Serializable {
         return theta;
     }
 
-    private static void checkDirections(double[] theta) {
-        for (int i = 0; i < theta.length; i++) {
-            for (int k = i + 1; k < theta.length; k++) {
-                if (Math.abs(StrictMath.sin(theta[i] - theta[k])) < SAME_DIRECTION) {
-                    throw new IllegalArgumentException("gauges " + letter(i) + " and "
-                            + letter(k) + " lie along one direction (0° or 180° apart), which "
-                            + "leaves the strain state undetermined: " + anglesText(theta));
-                }
-            }
-        }
-    }
-
-    private static String letter(int j) {
-        return j < 26 ? String.valueOf((char) ('a' + j)) : "#" + (j + 1);
-    }
-
-    private static String anglesText(double[] theta) {
+    static String anglesText(double[] theta) {
         StringBuilder text = new StringBuilder();
         for (int j = 0; j < theta.length; j++) {
             text.append(j == 0 ? "" : ", ").append(Angle.ofRadians(theta[j]));
         }
         return text.toString();
-    }
-
-    /**
-     * cos 2θ and sin 2θ, exact (to 50 digits) when 2θ is within 1e-9° of a multiple of 30°, as
-     * for the nominal angles of the usual rosettes (so that their matrices are exact: the
-     * rectangular one is {@code {{1, 0, 0}, {0, 0, 1}, {-1, 2, -1}}}), else {@link StrictMath}.
-     */
-    private static BigDecimal[] cosSinOfTwice(double theta) {
-        double degrees = Math.toDegrees(2 * theta);
-        long k = Math.round(degrees / 30);
-        if (Math.abs(degrees - 30.0 * k) < 1e-9) {
-            int step = (int) Math.floorMod(k, 12L);
-            BigDecimal half = new BigDecimal("0.5");
-            BigDecimal root = new BigDecimal(3).sqrt(DIGITS).multiply(half);
-            BigDecimal[] cos = {BigDecimal.ONE, root, half, BigDecimal.ZERO, half.negate(),
-                root.negate(), BigDecimal.ONE.negate(), root.negate(), half.negate(),
-                BigDecimal.ZERO, half, root};
-            return new BigDecimal[] {cos[step], cos[Math.floorMod(step - 3, 12)]};
-        }
-        double twice = 2 * theta;
-        return new BigDecimal[] {new BigDecimal(StrictMath.cos(twice)),
-            new BigDecimal(StrictMath.sin(twice))};
-    }
-
-    /**
-     * The rows (C, D, H) = (MᵀM)⁻¹Mᵀ·readings of the model M (n × 3), plus for a tee the
-     * condition −D·sin 2θa + H·cos 2θa = 0 as one more equation with a zero reading, in
-     * 50-digit decimals.
-     */
-    private static double[][] reduction(BigDecimal[][] model, BigDecimal[] teeCosSin,
-            double[] theta) {
-        int n = model.length;
-        int m = teeCosSin == null ? n : n + 1;
-        BigDecimal[][] a = new BigDecimal[m][];
-        for (int j = 0; j < n; j++) {
-            a[j] = model[j];
-        }
-        if (m > n) {
-            a[n] = new BigDecimal[] {BigDecimal.ZERO, teeCosSin[1].negate(), teeCosSin[0]};
-        }
-        BigDecimal[][] normal = new BigDecimal[3][3];
-        for (int r = 0; r < 3; r++) {
-            for (int c = 0; c < 3; c++) {
-                BigDecimal sum = BigDecimal.ZERO;
-                for (int j = 0; j < m; j++) {
-                    sum = sum.add(a[j][r].multiply(a[j][c]));
-                }
-                normal[r][c] = sum;
-            }
-        }
-        BigDecimal[][] inverse = inverse3(normal, theta);
-        double[][] rows = new double[3][n];
-        for (int r = 0; r < 3; r++) {
-            for (int j = 0; j < n; j++) {
-                BigDecimal sum = BigDecimal.ZERO;
-                for (int c = 0; c < 3; c++) {
-                    sum = sum.add(inverse[r][c].multiply(a[j][c]));
-                }
-                rows[r][j] = sum.round(DIGITS).doubleValue();
-            }
-        }
-        return rows;
-    }
-
-    private static BigDecimal[][] inverse3(BigDecimal[][] x, double[] theta) {
-        BigDecimal c00 = x[1][1].multiply(x[2][2]).subtract(x[1][2].multiply(x[2][1]));
-        BigDecimal c01 = x[0][2].multiply(x[2][1]).subtract(x[0][1].multiply(x[2][2]));
-        BigDecimal c02 = x[0][1].multiply(x[1][2]).subtract(x[0][2].multiply(x[1][1]));
-        BigDecimal c10 = x[1][2].multiply(x[2][0]).subtract(x[1][0].multiply(x[2][2]));
-        BigDecimal c11 = x[0][0].multiply(x[2][2]).subtract(x[0][2].multiply(x[2][0]));
-        BigDecimal c12 = x[0][2].multiply(x[1][0]).subtract(x[0][0].multiply(x[1][2]));
-        BigDecimal c20 = x[1][0].multiply(x[2][1]).subtract(x[1][1].multiply(x[2][0]));
-        BigDecimal c21 = x[0][1].multiply(x[2][0]).subtract(x[0][0].multiply(x[2][1]));
-        BigDecimal c22 = x[0][0].multiply(x[1][1]).subtract(x[0][1].multiply(x[1][0]));
-        BigDecimal det = x[0][0].multiply(c00).add(x[0][1].multiply(c10)).add(x[0][2].multiply(c20));
-        BigDecimal trace = x[0][0].add(x[1][1]).add(x[2][2]);
-        if (det.abs().compareTo(trace.pow(3).multiply(new BigDecimal("1e-24"))) <= 0) {
-            throw new IllegalArgumentException("the gauge directions leave the strain state "
-                    + "undetermined: " + anglesText(theta));
-        }
-        BigDecimal[][] cof = {{c00, c01, c02}, {c10, c11, c12}, {c20, c21, c22}};
-        BigDecimal[][] out = new BigDecimal[3][3];
-        for (int r = 0; r < 3; r++) {
-            for (int c = 0; c < 3; c++) {
-                out[r][c] = cof[r][c].divide(det, DIGITS);
-            }
-        }
-        return out;
     }
 
     // ---------------------------------------------------------------- value API

@@ -10,7 +10,7 @@ import org.strainmath.internal.Kernels;
  * from them. Three-gauge rosettes run loops that read the three arrays at one index; other
  * counts, or different offsets, loop over the gauges per sample.
  *
- * <p>The loops follow the findings of {@code DEVELOPERS.md}: one small loop per method, no
+ * <p>The loops follow the findings of {@code docs/kernel-findings.md}: one small loop per method, no
  * branch in a loop, a second square root in a loop of its own (JDK 17 does not vectorise a
  * long body with two), the NaN count in a pass of its own, chunks of {@link Kernels#CHUNK}.
  *
