@@ -22,7 +22,7 @@ import org.strainmath.quantity.VoltageRatio;
  * <h2>Arm numbering and the bridge equation</h2>
  * Arms are numbered 1 to 4 as in the textbook form of the bridge equation (Dally &amp; Riley,
  * <i>Experimental Stress Analysis</i>, 4th ed., eq. 6.19; Hoffmann, <i>An Introduction to
- * Measurements using Strain Gages</i>, HBM 1989, eq. 3.1):
+ * Measurements using Strain Gages</i>, 1989, eq. 3.1; equation numbers from memory):
  * <pre>
  *          Vo     R1·R3 − R2·R4              R1         R4
  *   r  =  ---  = ----------------------  = -------  −  -------
@@ -510,7 +510,11 @@ public final class Bridge implements Serializable {
         return equation.form == BridgeEquation.Form.LINEAR;
     }
 
-    /** The output at zero strain, as the instrument reads it (zero after {@link #zeroedByOffset}). */
+    /**
+     * The output at zero strain, as the instrument reads it. A zeroed bridge reads the initial
+     * reading it was zeroed at ({@link #zeroedByOffset}, {@link #zeroedInArm}), which is what
+     * converts to zero strain; a balanced bridge without zeroing reads 0.
+     */
     public VoltageRatio zeroOutput() {
         return VoltageRatio.ofVoltsPerVolt(equation.n0);
     }

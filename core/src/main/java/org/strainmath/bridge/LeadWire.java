@@ -20,7 +20,8 @@ import org.strainmath.quantity.Temperature;
  * </pre>
  * The linear temperature law holds to a fraction of a per cent for copper from about −50 °C to
  * 150 °C. Annealed copper per IEC 60028 (the International Annealed Copper Standard) is the
- * named default: ρ20 = 1/58 Ω·mm²/m = 0.017241 Ω·mm²/m and α20 = 0.00393 /K.
+ * named default: ρ20 = 1/58 Ω·mm²/m = 0.017241 Ω·mm²/m and α20 = 0.00393 /K (both from
+ * memory, not checked against the standard's text).
  *
  * <pre>
  *   LeadWire.copper(10, 0.14).resistance();     // 1.23153 Ω
@@ -31,10 +32,13 @@ import org.strainmath.quantity.Temperature;
  */
 public final class LeadWire {
 
-    /** Resistivity of annealed copper at 20 °C, Ω·mm²/m (IEC 60028: 1/58). */
+    /** Resistivity of annealed copper at 20 °C, Ω·mm²/m (IEC 60028: 1/58; from memory). */
     public static final double COPPER_RESISTIVITY = 1.0 / 58;
 
-    /** Temperature coefficient of resistance of annealed copper at 20 °C, 1/K (IEC 60028). */
+    /**
+     * Temperature coefficient of annealed copper's resistance at 20 °C, 1/K (IEC 60028; from
+     * memory).
+     */
     public static final double COPPER_TEMPERATURE_COEFFICIENT = 0.00393;
 
     private static final double REFERENCE_CELSIUS = 20.0;

@@ -17,13 +17,14 @@ import org.strainmath.quantity.Temperature;
  * factor and, optionally, transverse sensitivity and active grid area.
  *
  * <p>The gauge obeys the gauge-factor relation (ASTM E251, "gauge factor"; Dally &amp; Riley,
- * <i>Experimental Stress Analysis</i>, 4th ed., eq. 6.5):
+ * <i>Experimental Stress Analysis</i>, 4th ed., eq. 6.5, number from memory):
  * <pre>
  *   ΔR / R = K · ε
  *
  *   R   nominal resistance, Ω
  *   ΔR  change of resistance, Ω
- *   K   gauge factor, dimensionless (about 2 for constantan and Karma grids)
+ *   K   gauge factor, dimensionless (about 2 for the usual copper–nickel and nickel–chromium
+ *       alloy grids)
  *   ε   strain along the grid, m/m, positive in tension
  * </pre>
  * The relation is taken as exact at all strains in this library: the resistance at strain ε is

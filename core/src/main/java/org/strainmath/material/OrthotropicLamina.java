@@ -27,7 +27,7 @@ import org.strainmath.quantity.Stress;
  *   Q66 = G12                   Q16 = Q26 = 0
  * </pre>
  * and its transformation to axes x, y, where the fibre direction 1 lies at the ply angle θ
- * counter-clockwise from x (m = cos θ, n = sin θ; Jones, eq. 2.85):
+ * counter-clockwise from x (m = cos θ, n = sin θ; Jones, eq. 2.85, number from memory):
  * <pre>
  *   Q̄11 = Q11·m⁴ + 2(Q12 + 2Q66)·m²n² + Q22·n⁴
  *   Q̄12 = (Q11 + Q22 − 4Q66)·m²n² + Q12·(m⁴ + n⁴)

@@ -4,7 +4,7 @@ package org.strainmath.bridge;
  * The named arrangements of {@link Bridge}, with what the textbooks say of each: the strain
  * multiples of arms 1 to 4, the closed-form output ratio and the bridge factor. The closed forms
  * follow from the bridge equation with R_i = R·(1 + K·m_i·ε) (Hoffmann, <i>An Introduction to
- * Measurements using Strain Gages</i>, HBM 1989, ch. 3; Window, <i>Strain Gauge Technology</i>,
+ * Measurements using Strain Gages</i>, 1989, ch. 3; Window, <i>Strain Gauge Technology</i>,
  * 2nd ed., ch. 3; the forms as recalled from memory and re-derived by hand).
  */
 enum Arrangement {

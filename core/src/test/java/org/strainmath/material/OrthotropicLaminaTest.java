@@ -25,7 +25,8 @@ class OrthotropicLaminaTest {
     /**
      * Oracle: Q̄ = T⁻¹·Q·R·T·R⁻¹ (Jones, Mechanics of Composite Materials, 2nd ed., § 2.6,
      * eq. 2.84), with T the stress transformation from x, y to 1, 2 and R = diag(1, 1, 2) the
-     * Reuter matrix, computed with Commons Math matrices: an independent route to eq. 2.85.
+     * Reuter matrix, computed with Commons Math matrices: an independent route to eq. 2.85
+     * (equation numbers from memory).
      */
     private static RealMatrix transformedByMatrices(PlaneStiffness reduced, double theta) {
         double m = Math.cos(theta);
@@ -40,7 +41,8 @@ class OrthotropicLaminaTest {
 
     @Test
     void reducedStiffnessOfACarbonEpoxyPly() {
-        // T300/5208 carbon/epoxy, E1 = 181, E2 = 10.3, ν12 = 0.28, G12 = 7.17 GPa, gives
+        // A carbon/epoxy ply from a published ply-data table, E1 = 181, E2 = 10.3, ν12 = 0.28,
+        // G12 = 7.17 GPa, gives
         // Q11 = 181.8, Q22 = 10.35, Q12 = 2.897, Q66 = 7.17 GPa (Tsai and Hahn, Introduction to
         // Composite Materials, ply data table; values from memory, to their four digits).
         double[][] q = CARBON.reducedStiffness().toMatrix();
