@@ -49,14 +49,19 @@ public final class CalibrationFit {
     private final double[] weights;   // null: all 1
     private final int degree;
     private final boolean intercept;
+    /** The units of the loads and the readings, for the printed result; null if not given. */
+    private final String loadUnit;
+    private final String readingUnit;
 
     private CalibrationFit(double[] loads, double[] readings, double[] weights, int degree,
-            boolean intercept) {
+            boolean intercept, String loadUnit, String readingUnit) {
         this.loads = loads;
         this.readings = readings;
         this.weights = weights;
         this.degree = degree;
         this.intercept = intercept;
+        this.loadUnit = loadUnit;
+        this.readingUnit = readingUnit;
     }
 
     /**
@@ -78,7 +83,7 @@ public final class CalibrationFit {
             finite(x[i], "loads", i);
             finite(y[i], "readings", i);
         }
-        return new CalibrationFit(x, y, null, 1, true);
+        return new CalibrationFit(x, y, null, 1, true, null, null);
     }
 
     private static void finite(double value, String name, int index) {
@@ -97,7 +102,8 @@ public final class CalibrationFit {
             throw new IllegalArgumentException("degree must be 1 to 3 (use withDegreeInsisting "
                     + "for more): " + degree);
         }
-        return new CalibrationFit(loads, readings, weights, degree, intercept);
+        return new CalibrationFit(loads, readings, weights, degree, intercept,
+                loadUnit, readingUnit);
     }
 
     /**
@@ -118,12 +124,44 @@ public final class CalibrationFit {
             log.warn("calibration fit of degree {}: above 3 a polynomial tends to follow the "
                     + "scatter of the points rather than the transducer", degree);
         }
-        return new CalibrationFit(loads, readings, weights, degree, intercept);
+        return new CalibrationFit(loads, readings, weights, degree, intercept,
+                loadUnit, readingUnit);
+    }
+
+    /**
+     * A copy that prints its result with units: {@code loadUnit} for the loads (kN, say) and
+     * {@code readingUnit} for the readings (mV/V), so that each coefficient shows its own unit
+     * (mV/V per kN, mV/V per kN², ...). The arithmetic does not change: the fit works in the
+     * numbers given.
+     *
+     * @throws NullPointerException     if a unit is null
+     * @throws IllegalArgumentException if a unit is blank
+     */
+    public CalibrationFit withUnits(String loadUnit, String readingUnit) {
+        Objects.requireNonNull(loadUnit, "loadUnit");
+        Objects.requireNonNull(readingUnit, "readingUnit");
+        if (loadUnit.isBlank() || readingUnit.isBlank()) {
+            throw new IllegalArgumentException("loadUnit and readingUnit must not be blank: \""
+                    + loadUnit + "\", \"" + readingUnit + "\"");
+        }
+        return new CalibrationFit(loads, readings, weights, degree, intercept, loadUnit.strip(),
+                readingUnit.strip());
+    }
+
+    /** The unit of the loads, or null if none was given. */
+    String loadUnit() {
+        return loadUnit;
+    }
+
+    /** The unit of the readings, or null if none was given. */
+    String readingUnit() {
+        return readingUnit;
     }
 
     /** A copy without the intercept: the curve passes through zero reading at zero load. */
     public CalibrationFit withoutIntercept() {
-        return new CalibrationFit(loads, readings, weights, degree, false);
+        return new CalibrationFit(loads, readings, weights, degree, false,
+                loadUnit, readingUnit);
     }
 
     /**
@@ -143,7 +181,8 @@ public final class CalibrationFit {
         for (int i = 0; i < w.length; i++) {
             Checks.positiveFinite(w[i], "weights[" + i + "]");
         }
-        return new CalibrationFit(loads, readings, w, degree, intercept);
+        return new CalibrationFit(loads, readings, w, degree, intercept,
+                loadUnit, readingUnit);
     }
 
     /**

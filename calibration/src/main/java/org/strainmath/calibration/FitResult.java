@@ -455,20 +455,40 @@ public final class FitResult {
      */
     @Override
     public String toString() {
+        String load = fit.loadUnit();
+        String reading = fit.readingUnit();
         StringBuilder text = new StringBuilder(String.format(Locale.ROOT,
-                "FitResult[degree %d %s intercept, %d points, %d degrees of freedom]%n",
-                fit.degree(), fit.hasIntercept() ? "with" : "without", residuals.length, freedom));
-        text.append(String.format(Locale.ROOT, "  %-5s %-18s %s%n", "term", "coefficient",
-                "standard error"));
+                "FitResult[degree %d %s intercept, %d points, %d degrees of freedom%s]%n",
+                fit.degree(), fit.hasIntercept() ? "with" : "without", residuals.length, freedom,
+                load == null ? "" : "; load in " + load + ", reading in " + reading));
         double[] errors = standardErrors();
+        if (load == null) {
+            text.append(String.format(Locale.ROOT, "  %-5s %-18s %s%n", "term", "coefficient",
+                    "standard error"));
+        } else {
+            text.append(String.format(Locale.ROOT, "  %-5s %-18s %-18s %s%n", "term",
+                    "coefficient", "standard error", "unit"));
+        }
         for (int i = 0; i < coefficients.length; i++) {
-            text.append(String.format(Locale.ROOT, "  x^%-3d %-18s %s%n", i + first(),
-                    Format.number(coefficients[i]), Format.number(errors[i])));
+            int power = i + first();
+            if (load == null) {
+                text.append(String.format(Locale.ROOT, "  x^%-3d %-18s %s%n", power,
+                        Format.number(coefficients[i]), Format.number(errors[i])));
+            } else {
+                String unit = power == 0 ? reading : reading + " per " + load + switch (power) {
+                    case 1 -> "";
+                    case 2 -> "²";
+                    case 3 -> "³";
+                    default -> "^" + power;
+                };
+                text.append(String.format(Locale.ROOT, "  x^%-3d %-18s %-18s %s%n", power,
+                        Format.number(coefficients[i]), Format.number(errors[i]), unit));
+            }
         }
         text.append(String.format(Locale.ROOT,
-                "  residual standard deviation %s, R² %s, condition %s (scaled), %s (raw)",
-                Format.number(residualStandardDeviation()), Double.toString(rSquared()),
-                Format.number(condition), Format.number(rawCondition)));
+                "  residual standard deviation %s%s, R² %s, condition %s (scaled), %s (raw)",
+                Format.number(residualStandardDeviation()), reading == null ? "" : " " + reading,
+                Double.toString(rSquared()), Format.number(condition), Format.number(rawCondition)));
         return text.toString();
     }
 }

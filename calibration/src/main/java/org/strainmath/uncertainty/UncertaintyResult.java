@@ -93,6 +93,39 @@ public final class UncertaintyResult {
         return new BigDecimal(estimate).setScale(decimals, RoundingMode.HALF_EVEN).doubleValue();
     }
 
+    /**
+     * U to two significant digits as text, with a trailing zero kept ({@code 0.0040}, not
+     * {@code 0.004}): what a report prints (GUM 7.2.6). Plain from 1e-4 to 1e9, as the
+     * library's other numbers print, else with an exponent ({@code 9.9e-6}, {@code 4.0e-6}).
+     */
+    public String expandedUncertaintyText() {
+        double u = expandedUncertainty();
+        if (!(u > 0) || Double.isInfinite(u)) {
+            return Double.toString(u);
+        }
+        BigDecimal two = new BigDecimal(u).round(new MathContext(2, RoundingMode.HALF_UP));
+        if (two.doubleValue() >= 1e-4 && two.doubleValue() < 1e9) {
+            return two.toPlainString();
+        }
+        String digits = two.unscaledValue().toString();
+        int exponent = digits.length() - 1 - two.scale();
+        return digits.charAt(0) + "." + (digits.length() > 1 ? digits.substring(1, 2) : "0")
+                + "e" + exponent;
+    }
+
+    /**
+     * The estimate as text, to the last decimal place of {@link #expandedUncertaintyText()}
+     * ({@code 40.010} beside {@code 0.010}).
+     */
+    public String estimateText() {
+        double u = expandedUncertainty();
+        if (!(u > 0) || Double.isInfinite(u) || !Double.isFinite(estimate)) {
+            return Double.toString(estimate);
+        }
+        int scale = new BigDecimal(u).round(new MathContext(2, RoundingMode.HALF_UP)).scale();
+        return new BigDecimal(estimate).setScale(scale, RoundingMode.HALF_EVEN).toPlainString();
+    }
+
     /** The part of the variance from the second-order terms (0 unless asked for). */
     public double secondOrderVariance() {
         return secondOrderVariance;
@@ -125,8 +158,7 @@ public final class UncertaintyResult {
                 Format.number(estimate), Format.number(combined),
                 Double.isInfinite(effectiveDegrees) ? "∞" : Format.number(effectiveDegrees),
                 Format.number(coverageFactor), Format.number(probability * 100),
-                Format.number(expandedUncertainty()), Format.number(estimateRounded()),
-                Format.number(expandedUncertaintyRounded()),
+                Format.number(expandedUncertainty()), estimateText(), expandedUncertaintyText(),
                 correlated ? " (inputs correlated: shares do not add to 100 %)" : ""));
         return text.toString();
     }

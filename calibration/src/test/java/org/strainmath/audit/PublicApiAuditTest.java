@@ -221,6 +221,11 @@ class PublicApiAuditTest {
         double[] history = {0, 3, -2, 4, -1, 2, -3, 1};
         StressLife life = StressLife.of(SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3));
         sample(long[].class, () -> new long[16]);
+        sample(byte[].class, () -> new byte[48]);
+        sample(java.nio.ByteOrder.class, () -> java.nio.ByteOrder.BIG_ENDIAN,
+                () -> java.nio.ByteOrder.LITTLE_ENDIAN);
+        sample(org.strainmath.bridge.PackedCodes.class, () -> org.strainmath.bridge.PackedCodes.of(3,
+                java.nio.ByteOrder.BIG_ENDIAN, true));
         sample(Rainflow.class, Rainflow::astm, () -> Rainflow.astm().withGate(0.5));
         sample(CycleConsumer.class, () -> (CycleConsumer) (f, t, c) -> { });
         sample(RainflowCounter.class, () -> {

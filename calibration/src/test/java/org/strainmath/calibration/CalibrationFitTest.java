@@ -277,4 +277,33 @@ class CalibrationFitTest {
         assertThat(CalibrationFit.of(x, y).withDegree(3).withoutIntercept().toString())
                 .isEqualTo("CalibrationFit[degree 3 without intercept, 10 points]");
     }
+
+    @Test
+    void aFitPrintsEachCoefficientInItsOwnUnit() {
+        // By hand: the readings 0.5 + 2x + 0.1x² exactly, so the coefficients are 0.5, 2 and 0.1.
+        double[] kn = {0, 1, 2, 3, 4, 5};
+        double[] mvPerV = new double[kn.length];
+        for (int i = 0; i < kn.length; i++) {
+            mvPerV[i] = 0.5 + 2 * kn[i] + 0.1 * kn[i] * kn[i];
+        }
+        CalibrationFit plain = CalibrationFit.of(kn, mvPerV).withDegree(2);
+        FitResult fit = plain.withUnits(" kN", "mV/V ").fit();
+        assertThat(fit.coefficients()).containsExactly(plain.fit().coefficients());
+        String[] lines = fit.toString().split("\\R");
+        assertThat(lines[0]).isEqualTo("FitResult[degree 2 with intercept, 6 points, 3 degrees of"
+                + " freedom; load in kN, reading in mV/V]");
+        assertThat(lines[1]).startsWith("  term  coefficient").endsWith("unit");
+        assertThat(lines[2]).startsWith("  x^0 ").endsWith(" mV/V");
+        assertThat(lines[3]).startsWith("  x^1 ").endsWith(" mV/V per kN");
+        assertThat(lines[4]).startsWith("  x^2 ").endsWith(" mV/V per kN²");
+        assertThat(lines[5]).startsWith("  residual standard deviation ").contains(" mV/V, R² ");
+        // Units survive the other settings, and the text without them is as before.
+        assertThat(plain.withUnits("kN", "mV/V").withoutIntercept().fit().toString())
+                .contains("x^1").contains("mV/V per kN").doesNotContain("x^0");
+        assertThat(plain.fit().toString()).doesNotContain("unit").doesNotContain("load in");
+        assertThatThrownBy(() -> plain.withUnits("kN", " ")).isInstanceOf(IllegalArgumentException.class)
+                .hasMessage("loadUnit and readingUnit must not be blank: \"kN\", \" \"");
+        assertThatThrownBy(() -> plain.withUnits(null, "mV/V")).isInstanceOf(NullPointerException.class)
+                .hasMessage("loadUnit");
+    }
 }

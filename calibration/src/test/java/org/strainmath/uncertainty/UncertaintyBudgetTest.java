@@ -5,6 +5,8 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.strainmath.bridge.Bridge;
 import org.strainmath.bridge.StrainGauge;
 
@@ -81,6 +83,32 @@ class UncertaintyBudgetTest {
         assertThat(r.expandedUncertaintyRounded()).isEqualTo(0.012);
         assertThat(r.estimateRounded()).isEqualTo(100.021);
         assertThat(r.toString()).contains("y = 100.021 ± 0.012");
+        assertThat(r.expandedUncertaintyText()).isEqualTo("0.012");
+        assertThat(r.estimateText()).isEqualTo("100.021");
+    }
+
+    @ParameterizedTest
+    @CsvSource({
+        // u, estimate -> U text, estimate text, with k = 2 (normal, 95.45 %). By hand: U = 2u
+        // to two significant digits, a trailing zero kept, y to U's last place (GUM 7.2.6).
+        "0.002, 40.0104, 0.0040, 40.0104",
+        "0.005, 40.0104, 0.010, 40.010",
+        "0.0249, 3.14159, 0.050, 3.142",
+        "0.26, 12.346, 0.52, 12.35",
+        "4.9, 1234.5, 9.8, 1234.5",
+        "6.0, 1234.5, 12, 1234",
+        "260, 123456, 520, 123460",
+        "0.00000198, 0.000512, 4.0e-6, 0.0005120",
+        "2.0e9, 1.0e10, 4.0e9, 10000000000",
+    })
+    void theExpandedUncertaintyPrintsItsTwoSignificantDigits(double u, double estimate,
+            String expandedText, String estimateText) {
+        UncertaintyResult r = UncertaintyBudget.of(x -> x[0],
+                InputQuantity.ofStandardUncertainty("x", estimate, u)).evaluate(0.954499736103642);
+        assertThat(r.coverageFactor()).isCloseTo(2, within(1e-9));
+        assertThat(r.expandedUncertaintyText()).isEqualTo(expandedText);
+        assertThat(r.estimateText()).isEqualTo(estimateText);
+        assertThat(r.toString()).contains(estimateText + " ± " + expandedText);
     }
 
     @Test

@@ -100,7 +100,10 @@ public final class ChannelFrames implements Serializable {
         Objects.requireNonNull(dst, "dst");
         int n = channels.length;
         Objects.checkFromIndexSize(framesOff, Math.multiplyExact(frameCount, n), frames.length);
-        Objects.checkFromIndexSize(0, n, dst.length);
+        if (dst.length < n) {
+            throw new IndexOutOfBoundsException("dst has " + dst.length + " rows for " + n
+                    + " channels");
+        }
         if (celsiusPerFrame != null) {
             Objects.checkFromIndexSize(celsiusOff, frameCount, celsiusPerFrame.length);
         }
@@ -109,7 +112,7 @@ public final class ChannelFrames implements Serializable {
                 // Not Objects.requireNonNull(x, message): that would build the message each call.
                 throw new NullPointerException("dst[" + c + "]");
             }
-            Objects.checkFromIndexSize(dstOff, frameCount, dst[c].length);
+            rowRange(dst[c], c, dstOff, frameCount);
             Checks.disjoint(celsiusPerFrame, celsiusOff, "celsiusPerFrame", dst[c], dstOff,
                     "dst[" + c + "]", frameCount);
             if (channels[c].needsTemperature() && celsiusPerFrame == null) {
@@ -129,6 +132,17 @@ public final class ChannelFrames implements Serializable {
     @Override
     public String toString() {
         return "ChannelFrames[" + channels.length + " channels per frame]";
+    }
+
+    /**
+     * Throws unless {@code dst[c][off, off + count)} exists, naming the row; the message is built
+     * only when it throws, so that a block call allocates nothing.
+     */
+    private static void rowRange(double[] row, int c, int off, int count) {
+        if (off < 0 || count < 0 || off > row.length - count) {
+            throw new IndexOutOfBoundsException("dst[" + c + "] has " + row.length
+                    + " values for " + count + " frames from " + off);
+        }
     }
 
     // ---------------------------------------------------------------- serial form
@@ -163,4 +177,5 @@ public final class ChannelFrames implements Serializable {
             });
         }
     }
+
 }

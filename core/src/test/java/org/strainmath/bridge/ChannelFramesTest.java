@@ -67,9 +67,15 @@ class ChannelFramesTest {
                 .isInstanceOf(IllegalArgumentException.class)
                 .hasMessage("frames.length must be a whole number of frames of 3 channels: 1003");
         assertThatThrownBy(() -> frames.toStrain(new int[9], new double[2][3]))
-                .isInstanceOf(IndexOutOfBoundsException.class);
+                .isInstanceOf(IndexOutOfBoundsException.class)
+                .hasMessage("dst has 2 rows for 3 channels");
         assertThatThrownBy(() -> frames.toStrain(new int[9], new double[3][2]))
-                .isInstanceOf(IndexOutOfBoundsException.class);
+                .isInstanceOf(IndexOutOfBoundsException.class)
+                .hasMessage("dst[0] has 2 values for 3 frames from 0");
+        assertThatThrownBy(() -> frames.toStrain(new int[9], 0, 3, null, 0,
+                new double[][] {new double[5], new double[4], new double[5]}, 2))
+                .isInstanceOf(IndexOutOfBoundsException.class)
+                .hasMessage("dst[1] has 4 values for 3 frames from 2");
         assertThatThrownBy(() -> frames.toStrain(new int[9], new double[][] {new double[3], null, new double[3]}))
                 .isInstanceOf(NullPointerException.class).hasMessage("dst[1]");
         assertThatThrownBy(() -> ChannelFrames.of(HOT).toStrain(new int[4], new double[1][4]))

@@ -143,8 +143,12 @@ public final class Demo {
                 + " (the working folder's)");
         out.println();
         out.println("Results are only as good as the installation, the gauge data and the"
-                + " calibration;");
-        out.println("they are no substitute for an assessment by a qualified engineer.");
+                + " calibration. They do not");
+        out.println("replace an assessment, under the codes that apply where the structure"
+                + " stands, by a qualified");
+        out.println("(where required, licensed) engineer. Excitation and wiring follow the"
+                + " instrument's and the");
+        out.println("site's electrical rules.");
     }
 
     /**
@@ -239,7 +243,7 @@ public final class Demo {
                 + " mV/V):");
         out.println(String.format(Locale.ROOT,
                 "  force at the proof load: %s kN ± %s kN (k = %.2f, 95 %%; truth of the demo: 40 kN)",
-                load.estimateRounded(), load.expandedUncertaintyRounded(),
+                load.estimateText(), load.expandedUncertaintyText(),
                 load.coverageFactor()));
         XYChart chart = new XYChartBuilder().width(640).height(400)
                 .title("Tension link: residuals of the rig calibration (demo)")

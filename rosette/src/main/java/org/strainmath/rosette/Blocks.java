@@ -31,7 +31,10 @@ final class Blocks {
             if (readings[j] == null) {
                 throw new NullPointerException("readings[" + j + "]");   // message built only here
             }
-            Objects.checkFromIndexSize(srcOff, len, readings[j].length);
+            if (srcOff < 0 || len < 0 || srcOff > readings[j].length - len) {
+                throw new IndexOutOfBoundsException("readings[" + j + "] has "
+                        + readings[j].length + " values for " + len + " from " + srcOff);
+            }
         }
         output(readings, srcOff, dstOff, len, o1, n1);
         if (n2 != null) {
@@ -51,7 +54,7 @@ final class Blocks {
 
     private static void output(double[][] readings, int srcOff, int dstOff, int len,
             double[] out, String name) {
-        Objects.checkFromIndexSize(dstOff, len, Objects.requireNonNull(out, name).length);
+        range(Objects.requireNonNull(out, name), name, dstOff, len);
         if (srcOff != dstOff) {
             for (double[] in : readings) {
                 if (out == in) {
@@ -59,6 +62,17 @@ final class Blocks {
                             + "needs dstOff == srcOff: " + dstOff + " != " + srcOff);
                 }
             }
+        }
+    }
+
+    /**
+     * Throws unless {@code a[off, off + len)} exists, naming the array (the message is built
+     * only when it throws): {@code readings[1] has 10 values for 64 from 0}.
+     */
+    private static void range(double[] a, String name, int off, int len) {
+        if (off < 0 || len < 0 || off > a.length - len) {
+            throw new IndexOutOfBoundsException(name + " has " + a.length + " values for " + len
+                    + " from " + off);
         }
     }
 }

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 
+import org.strainmath.bridge.StrainChannel;
 import org.strainmath.bridge.StrainGauge;
 import org.strainmath.internal.Checks;
 import org.strainmath.internal.SerialForms;
@@ -266,6 +267,38 @@ public final class Rosette implements Serializable {
     public Rosette withMaterial(IsotropicMaterial material) {
         return new Rosette(kind, nominal, measured, clockwise, reference, grids,
                 Objects.requireNonNull(material, "material"), tee);
+    }
+
+    /**
+     * Checks that the channels that read this rosette's grids do not correct for transverse
+     * sensitivity a second time, and returns this rosette. A rosette's grids see each other's
+     * strains, so their transverse correction belongs here ({@link #withGaugeData}), where all
+     * grids are solved together; a channel's correction
+     * ({@link StrainChannel#withTransverseCorrection}) assumes one known ratio of transverse to
+     * axial strain, which a rosette's grids do not have. Call it once where the channels and the
+     * rosette are configured together.
+     *
+     * @throws NullPointerException     if {@code channels} or a channel is null
+     * @throws IllegalArgumentException if this rosette has gauge data with a transverse
+     *                                  sensitivity and a channel corrects for it too
+     */
+    public Rosette checkChannels(StrainChannel... channels) {
+        Objects.requireNonNull(channels, "channels");
+        boolean here = false;
+        if (grids != null) {
+            for (StrainGauge g : grids) {
+                here |= g.transverseSensitivity() != 0;
+            }
+        }
+        for (int c = 0; c < channels.length; c++) {
+            StrainChannel channel = Objects.requireNonNull(channels[c], "channels[" + c + "]");
+            if (here && channel.transverseRatio().isPresent()) {
+                throw new IllegalArgumentException("channels[" + c + "] must not correct for"
+                        + " transverse sensitivity: the rosette's gauge data already does (correct"
+                        + " on the rosette only): " + channel.transverseRatio().getAsDouble());
+            }
+        }
+        return this;
     }
 
     // ---------------------------------------------------------------- properties

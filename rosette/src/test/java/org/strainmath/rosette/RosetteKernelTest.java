@@ -129,7 +129,11 @@ class RosetteKernelTest {
         assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 0, in[1], b, 1, 3))
                 .hasMessage("e1 is also an input array and needs dstOff == srcOff: 1 != 0");
         assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 1, a, b, 0, 4))
-                .isInstanceOf(IndexOutOfBoundsException.class);
+                .isInstanceOf(IndexOutOfBoundsException.class)
+                .hasMessage("readings[0] has 4 values for 4 from 1");
+        assertThatThrownBy(() -> rosette.toPrincipalStrains(in, 0, a, new double[3], 0, 4))
+                .isInstanceOf(IndexOutOfBoundsException.class)
+                .hasMessage("e2 has 3 values for 4 from 0");
         assertThatThrownBy(() -> rosette.toPrincipalStrains(new double[][] {a, null, b}, 0, a, b, 0, 4))
                 .isInstanceOf(NullPointerException.class).hasMessage("readings[1]");
         assertThatThrownBy(() -> rosette.toVonMises(in, 0, a, 0, 4))

@@ -14,6 +14,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.strainmath.bridge.AdcInput;
+import org.strainmath.bridge.Bridge;
+import org.strainmath.bridge.StrainChannel;
 import org.strainmath.bridge.StrainGauge;
 import org.strainmath.material.IsotropicMaterial;
 import org.strainmath.material.PlaneStrain;
@@ -315,6 +318,27 @@ class RosetteTest {
         assertThatThrownBy(() -> Rosette.ofDegrees(Double.NaN, 1, 2)).hasMessage("degrees must be finite: NaN");
         assertThatThrownBy(() -> Rosette.rectangular().withMaterial(null))
                 .isInstanceOf(NullPointerException.class).hasMessage("material");
+    }
+
+    @Test
+    void aGridIsCorrectedForTransverseSensitivityOnTheRosetteOrTheChannelNotBoth() {
+        // Definition: correcting on both divides the cross-sensitivity out twice.
+        StrainGauge grid = StrainGauge.ofOhms(350, 2.08).withTransverseSensitivity(0.012);
+        AdcInput adc = AdcInput.ratiometric(24, 128);
+        StrainChannel plain = StrainChannel.of(Bridge.quarter(grid), adc);
+        StrainChannel corrected = plain.withTransverseCorrection(-0.3);
+        Rosette withData = Rosette.rectangular().withGaugeData(grid);
+        assertThat(withData.checkChannels(plain, plain, plain)).isSameAs(withData);
+        assertThat(Rosette.rectangular().checkChannels(corrected, corrected, corrected))
+                .isEqualTo(Rosette.rectangular());
+        assertThat(Rosette.rectangular().withGaugeData(StrainGauge.ofOhms(350, 2.08))
+                .checkChannels(corrected)).isNotNull();
+        assertThatThrownBy(() -> withData.checkChannels(plain, corrected, plain))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessage("channels[1] must not correct for transverse sensitivity: the rosette's"
+                        + " gauge data already does (correct on the rosette only): -0.3");
+        assertThatThrownBy(() -> withData.checkChannels(plain, null))
+                .isInstanceOf(NullPointerException.class).hasMessage("channels[1]");
     }
 
     @Test
