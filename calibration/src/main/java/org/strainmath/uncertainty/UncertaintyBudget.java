@@ -31,7 +31,7 @@ import org.strainmath.internal.Checks;
  * <p>The method (GUM clause in brackets):
  * <pre>
  *   cᵢ = ∂f/∂xᵢ ≈ [f(x + uᵢ·eᵢ) − f(x − uᵢ·eᵢ)] / (2uᵢ)    (5.1.3, note 2: differences of ±uᵢ)
- *   u_c² = Σ cᵢ²·uᵢ² + 2·Σ_{i<j} cᵢ·cⱼ·uᵢ·uⱼ·r(xᵢ, xⱼ)      (5.1.2, 5.2.2)
+ *   u_c² = Σ cᵢ²·uᵢ² + 2·Σ_{i&lt;j} cᵢ·cⱼ·uᵢ·uⱼ·r(xᵢ, xⱼ)      (5.1.2, 5.2.2)
  *   ν_eff = u_c⁴ / Σ (cᵢ·uᵢ)⁴/νᵢ                            (G.4.1, Welch–Satterthwaite)
  *   k = t_{(1+p)/2}(ν_eff),   U = k·u_c                    (G.4.1, 6.2)
  * </pre>
