@@ -13,6 +13,7 @@ class CalibrationRunTest {
 
     @Test
     void aRunKeepsCopiesOfItsPointsAndIsAValue() {
+        // Definition: the points as given, copied in and out; the text is the library's own.
         double[] loads = LOADS.clone();
         double[] readings = READINGS.clone();
         CalibrationRun run = CalibrationRun.ascending(loads, readings);

@@ -94,6 +94,8 @@ class TransducerCalibrationTest {
 
     @Test
     void aPerfectlyLinearTransducerHasNoNonlinearityOrHysteresis() {
+        // By hand: readings exactly proportional to load, the same up and down, have no error of
+        // any kind.
         double[] up = {0, 0.5, 1.0, 1.5, 2.0};
         double[] down = {2.0, 1.5, 1.0, 0.5, 0};
         TransducerCalibration cal = TransducerCalibration.of(100)
@@ -109,6 +111,8 @@ class TransducerCalibrationTest {
 
     @Test
     void scalingTheReadingsScalesNothingInPercentOfRatedOutput() {
+        // Definition: every error is in percent of rated output, so scaling the readings leaves it
+        // unchanged.
         TransducerCalibration one = calibration(1);
         TransducerCalibration scaled = calibration(3.7);
         assertThat(scaled.ratedOutput()).isCloseTo(3.7 * one.ratedOutput(), within(1e-12));

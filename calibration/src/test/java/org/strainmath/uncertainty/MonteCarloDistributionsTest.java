@@ -52,6 +52,8 @@ class MonteCarloDistributionsTest {
     @MethodSource("inputs")
     void theIdentityModelReturnsTheInputDistribution(InputQuantity input, double sd,
             double upper) {
+        // Oracle: the quantiles of inputs() (Commons Math, JCGM 101 6.4.6); tolerances from the
+        // sampling error, see the class comment.
         MonteCarloResult r = UncertaintyBudget.of(v -> v[0], input).monteCarlo(TRIALS, 42, 0.95);
         double x = input.estimate();
         assertThat(r.estimate()).isCloseTo(x, within(5 * sd / Math.sqrt(TRIALS)));

@@ -102,6 +102,8 @@ class AdcInputTest {
 
     @Test
     void blocksAreTheScalarFunctionBitForBit() {
+        // Definition: the block conversion is the scalar conversion bit for bit, with its NaN
+        // count.
         SplittableRandom random = new SplittableRandom(24);
         int[] codes = new int[3000];
         short[] words = new short[3000];

@@ -14,6 +14,7 @@ class BridgeArmTest {
 
     @Test
     void kindsAndText() {
+        // Definition: the arm's kinds and strain multiples as given; the text is the library's own.
         BridgeArm active = BridgeArm.active(GAUGE, -0.3);
         assertThat(active.isActive()).isTrue();
         assertThat(active.isDummy()).isFalse();

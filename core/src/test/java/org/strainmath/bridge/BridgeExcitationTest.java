@@ -55,6 +55,7 @@ class BridgeExcitationTest {
 
     @Test
     void densityNeedsTheGridArea() {
+        // Definition: the grid area as given; a power density needs it.
         assertThatThrownBy(() -> Bridge.quarter(GAUGE_120).maximumExcitationForPowerDensity(0.001))
                 .isInstanceOf(IllegalArgumentException.class)
                 .hasMessage("gridArea must be given for every gauge of the bridge: active gauge ×1.0"

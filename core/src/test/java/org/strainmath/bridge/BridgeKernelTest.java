@@ -84,6 +84,8 @@ class BridgeKernelTest {
     @ParameterizedTest
     @EnumSource(Arrangement.class)
     void bothWaysOfCountingGiveTheScalarInverseAndItsCount(Arrangement arrangement) {
+        // Definition: the block inverse is the scalar inverse bit for bit; the count is the three
+        // bad readings put in by hand.
         Bridge bridge = arrangement.build(StrainGauge.ofOhms(350, 2.1), 0.3);
         SplittableRandom random = new SplittableRandom(17);
         double[] src = new double[4 * 2048 + 100];
@@ -107,6 +109,7 @@ class BridgeKernelTest {
     @ParameterizedTest
     @EnumSource(Arrangement.class)
     void blockForwardIsTheScalarForwardBitForBit(Arrangement arrangement) {
+        // Definition: the block forward is the scalar forward bit for bit.
         Bridge bridge = arrangement.build(StrainGauge.ofOhms(120, 2.0), 0.3);
         double[] src = inputs(new SplittableRandom(12), 0.05, 1e9);
         assertThat(assertBlockIsScalar(src, bridge::toRatio, bridge::toRatio)).isGreaterThan(0);
@@ -114,6 +117,8 @@ class BridgeKernelTest {
 
     @Test
     void offsetsAreHonouredAndNothingOutsideIsTouched() {
+        // Definition of the block convention: n samples from src[srcOffset] to dst[dstOffset],
+        // nothing else written.
         Bridge bridge = Bridge.quarter(StrainGauge.ofOhms(120, 2.0));
         double[] src = {9, 9, 1e-3, -1e-3, 2e-3, 9};
         double[] dst = {7, 7, 7, 7, 7, 7, 7};

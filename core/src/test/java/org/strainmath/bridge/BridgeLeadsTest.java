@@ -140,6 +140,9 @@ class BridgeLeadsTest {
 
     @Test
     void leadsShowOnTheBridgeSheetAndAreValidated() {
+        // By hand: a three-wire lead puts one lead in arms 1 and 2 and none in arm 3; the two
+        // excitation leads of 0.5 Ω add to 1 Ω; no leads leave the sensitivity at 1 and the zero at
+        // 0.
         Bridge bridge = Bridge.quarter(GAUGE).withThreeWireLeads(TWO_OHMS)
                 .withExcitationLeads(Resistance.ofOhms(0.5));
         assertThat(bridge.toString()).endsWith("; leads: arm 1 2.0 Ω, arm 2 2.0 Ω, excitation 1.0 Ω]");

@@ -70,6 +70,8 @@ class BridgePropertiesTest {
     @MethodSource("cases")
     void inverseOfForwardReturnsTheStrain(Arrangement arrangement, double k, double nu,
             double ohms, double strain) {
+        // Definition: the inverse undoes the forward, to 1e-12 relative (rounding of both, by
+        // hand).
         Bridge bridge = arrangement.build(StrainGauge.ofOhms(ohms, k), nu);
         double back = bridge.toStrain(bridge.toRatio(strain));
         assertThat(back).isCloseTo(strain, within(Math.max(1e-12 * Math.abs(strain), 1e-18)));

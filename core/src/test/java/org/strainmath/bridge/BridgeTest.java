@@ -65,6 +65,8 @@ class BridgeTest {
     @ParameterizedTest
     @EnumSource(Arrangement.class)
     void everyArrangementMatchesItsClosedForm(Arrangement arrangement) {
+        // Oracle: each arrangement's closed form in Arrangement (textbook forms, re-derived by
+        // hand).
         double nu = 0.3;
         Bridge bridge = arrangement.build(GAUGE_350, nu);
         for (double micro : new double[] {-50_000, -2000, -1, 1e-6, 3, 1000, 50_000}) {
@@ -125,6 +127,8 @@ class BridgeTest {
 
     @Test
     void generalBridgeWithUnequalArmsIsUnbalancedAndExact() {
+        // Oracle: the bridge equation in 50-digit BigDecimal (ExactBridge), independent of the
+        // library.
         Bridge bridge = Bridge.of(BridgeArm.active(GAUGE_350, 1),
                 BridgeArm.completion(Resistance.ofOhms(351)),
                 BridgeArm.completion(Resistance.ofOhms(349.5)),
@@ -233,6 +237,8 @@ class BridgeTest {
 
     @Test
     void poissonRatioOfZeroLeavesADummyGauge() {
+        // By hand: with ν = 0 the Poisson arm sees no strain, so only arm 1 counts: bridge factor
+        // 1.
         Bridge bridge = Bridge.halfAxialPoisson(GAUGE_120, 0.0);
         assertThat(bridge.arm(2).isDummy()).isTrue();
         assertThat(bridge.bridgeFactor()).isEqualTo(1.0);

@@ -98,6 +98,9 @@ class BridgeZeroingTest {
 
     @Test
     void bothMethodsAgreeForSmallUnbalanceAndDifferForLarge() {
+        // Common practice, no source: an offset zero is as good as a zero in the arm for a small
+        // unbalance and not for a large one. The bounds bracket what this bridge gives (2.4e-7
+        // relative at r0 = 1e-4, 4.2e-4 at r0 = 1e-2, computed once) with a margin each way.
         Bridge quarter = Bridge.quarter(GAUGE);
         for (double r0 : new double[] {1e-4, 1e-2}) {
             VoltageRatio initial = VoltageRatio.ofVoltsPerVolt(r0);

@@ -47,6 +47,7 @@ class ChannelProofTest {
     @MethodSource("bridges")
     void aRegularIntervalHasAFiniteQuotientAtEveryReading(String name, Bridge bridge,
             boolean everyday) {
+        // Definition: a proven-regular interval gives a finite strain at every reading inside it.
         SplittableRandom random = new SplittableRandom(name.hashCode());
         double low = bridge.ratioLow();
         double high = bridge.ratioHigh();

@@ -39,6 +39,7 @@ class LeadWireTest {
 
     @Test
     void otherConductorsAndZeroLength() {
+        // By hand: R = ρ·L/A = 0.0178 Ω·mm²/m × 2 m / 0.5 mm² = 0.0712 Ω; zero length, zero ohms.
         LeadWire nickelPlated = LeadWire.of(2, 0.5, 0.0178, 0.0039);
         assertThat(nickelPlated.resistance().toOhms()).isCloseTo(0.0712, within(1e-15));
         assertThat(LeadWire.copper(0, 0.5).resistance().isZero()).isTrue();

@@ -25,6 +25,7 @@ class StrainGaugeTest {
 
     @Test
     void dataIsKeptAndCopiedWithOneChange() {
+        // Definition: the values as given, kept by each copy; the text is the library's own.
         StrainGauge gauge = StrainGauge.of(Resistance.ofOhms(350), 2.1)
                 .withTransverseSensitivity(0.012);
         assertThat(gauge.nominalResistance()).isEqualTo(Resistance.ofOhms(350));

@@ -67,6 +67,8 @@ class ThermalOutputTest {
 
     @Test
     void blocksAreTheScalarFunctionBitForBit() {
+        // Definition: the block correction is the scalar correction bit for bit, with its NaN
+        // count.
         ThermalOutput.Correction correction = CURVE.zeroedAt(Temperature.ofCelsius(20), 2.1);
         SplittableRandom random = new SplittableRandom(5);
         double[] strain = new double[3000];

@@ -39,6 +39,8 @@ class MeanStressCorrectionTest {
 
     @Test
     void atZeroMeanEveryCorrectionIsTheAmplitude() {
+        // Definition: every mean-stress correction is the identity at zero mean (each published
+        // form reduces to σa there, by hand).
         for (MeanStressCorrection c : new MeanStressCorrection[] {GOODMAN, GERBER, MORROW, SWT,
             MeanStressCorrection.none()}) {
             assertThat(c.equivalentAmplitude(123e6, 0)).as("%s", c).isCloseTo(123e6, within(1e-7));

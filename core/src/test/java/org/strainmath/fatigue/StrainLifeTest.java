@@ -37,6 +37,7 @@ class StrainLifeTest {
     @ParameterizedTest(name = "εa = {0}, σm = {1}")
     @MethodSource("cycles")
     void morrowsSolutionIsBrentsRoot(double amplitude, double mean) {
+        // Oracle: Commons Math's Brent solver on Morrow's form of Coffin–Manson–Basquin in ln(2N).
         StrainLife morrow = STEEL.withMorrowCorrection();
         double x = brent(ln -> (1758e6 - mean) / 207e9 * Math.exp(-0.0977 * ln)
                 + 2.12 * Math.exp(-0.774 * ln) - amplitude);
@@ -47,6 +48,8 @@ class StrainLifeTest {
     @ParameterizedTest(name = "εa = {0}, σm = {1}")
     @MethodSource("cycles")
     void smithWatsonToppersSolutionIsBrentsRoot(double amplitude, double mean) {
+        // Oracle: Commons Math's Brent solver on the Smith–Watson–Topper parameter σmax·εa in
+        // ln(2N).
         double peak = 207e9 * amplitude + mean;
         if (peak <= 0) {
             assertThat(STEEL.withSmithWatsonTopper().reversalsToFailure(amplitude, mean)).isInfinite();

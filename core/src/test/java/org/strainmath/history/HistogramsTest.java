@@ -18,6 +18,8 @@ class HistogramsTest {
 
     @Test
     void binsHoldTheirLowerEdgeAndTheLastBinItsUpperEdge() {
+        // By hand: bins of width 2 from 0 to 10; each bin holds its lower edge, the last also its
+        // upper edge.
         Bins uniform = Bins.uniform(0, 10, 5);
         assertThat(uniform.edges()).containsExactly(0, 2, 4, 6, 8, 10);
         assertThat(uniform.indexOf(0)).isZero();
@@ -113,6 +115,8 @@ class HistogramsTest {
 
     @Test
     void batchBinsMustCoverTheCountAndStreamingTalliesWhatFallsOutside() {
+        // ASTM E1049-85 §5.4.4 example (as in RainflowAstmExampleTest): of its 4 cycles, the half
+        // cycle of range 9 lies outside bins up to 8.
         Cycles cycles = Rainflow.astm().count(ASTM);
         assertThatThrownBy(() -> cycles.rangeHistogram(Bins.uniform(0, 8, 8)))
                 .isInstanceOf(IllegalArgumentException.class)
@@ -156,6 +160,7 @@ class HistogramsTest {
 
     @Test
     void histogramsOfTwoPartsAddUp() {
+        // By hand: 1 + 0.5 cycles of range 3 in bin 3; the range 12 lies outside bins up to 10.
         RangeHistogram a = RangeHistogram.of(Bins.uniform(0, 10, 10));
         RangeHistogram b = RangeHistogram.of(Bins.uniform(0, 10, 10));
         a.accept(0, 3, 1);
@@ -215,6 +220,7 @@ class HistogramsTest {
 
     @Test
     void cyclesGivenByHandAreValidated() {
+        // Definition: range = |to − from| = 8, mean = (from + to)/2 = 1, amplitude = range/2 = 4.
         assertThatThrownBy(() -> Cycles.of(new double[1], new double[2], new double[1]))
                 .hasMessage("to and counts must have the length of from (1): 2 and 1");
         assertThatThrownBy(() -> Cycles.of(new double[] {0}, new double[] {1}, new double[] {0}))

@@ -54,6 +54,8 @@ class TurningPointFilterTest {
 
     @Test
     void inPlaceTheTurningPointsOverwriteTheSamples() {
+        // By hand: the reversals of 0 1 2 1 0 3 −1 −1 2 are 0 2 0 3 −1, with 2 pending as the last
+        // point.
         double[] x = {0, 1, 2, 1, 0, 3, -1, -1, 2};
         double[] copy = x.clone();
         TurningPointFilter filter = TurningPointFilter.withGate(0);

@@ -53,6 +53,7 @@ class ChecksTest {
 
     @Test
     void acceptedValuesPassThroughUnchanged() {
+        // Definition: an accepted value is returned as it came.
         assertThat(Checks.finite(-3.5, "x")).isEqualTo(-3.5);
         assertThat(Checks.positiveFinite(Double.MIN_VALUE, "x")).isEqualTo(Double.MIN_VALUE);
         assertThat(Checks.nonNegativeFinite(0.0, "x")).isEqualTo(0.0);

@@ -39,6 +39,7 @@ class KernelsTest {
 
     @Test
     void infinitiesAndOverflowingSumsAreNotCountedAsNaN() {
+        // Definition: only NaN is counted (IEEE 754: ±∞ and MAX_VALUE are numbers).
         assertThat(Kernels.countNaN(new double[] {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY},
                 0, 2)).isZero();
         double[] big = new double[16];

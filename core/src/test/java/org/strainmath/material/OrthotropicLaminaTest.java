@@ -97,6 +97,8 @@ class OrthotropicLaminaTest {
 
     @Test
     void zeroAndHalfTurnsGiveTheReducedStiffness() {
+        // Definition: the transformation is the identity at 0° and 180°, and swaps Q11 and Q22 at
+        // 90° (by hand from the rotation).
         double[][] q = CARBON.reducedStiffness().toMatrix();
         assertThat(CARBON.transformedStiffness(Angle.ZERO).toMatrix()).isDeepEqualTo(q);
         double[][] half = CARBON.transformedStiffness(Angle.ofDegrees(180)).toMatrix();
@@ -136,6 +138,7 @@ class OrthotropicLaminaTest {
 
     @Test
     void unstableOrMalformedLaminaeAreRefused() {
+        // By hand: e1/e2 = 10/40 = 0.25 < 0.6² = 0.36; with e1 = e2, ν21 = ν12·e2/e1 = ν12.
         Stress e = Stress.ofGigapascals(10);
         assertThatThrownBy(() -> OrthotropicLamina.of(Stress.ofGigapascals(10), Stress.ofGigapascals(40), 0.6, e))
                 .isInstanceOf(IllegalArgumentException.class)

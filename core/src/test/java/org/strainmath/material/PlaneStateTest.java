@@ -71,6 +71,8 @@ class PlaneStateTest {
     @MethodSource("states")
     void stressTransformsAsATensorAndKeepsItsInvariants(double sx, double sy, double t,
             double degrees) {
+        // Oracle: the tensor rotation R·σ·Rᵀ and its eigenvalues in Commons Math (RealMatrix,
+        // EigenDecomposition).
         PlaneStress s = new PlaneStress(sx * 1e11, sy * 1e11, t * 1e11);
         Angle theta = Angle.ofDegrees(degrees);
         PlaneStress turned = s.rotatedBy(theta);
@@ -130,6 +132,8 @@ class PlaneStateTest {
 
     @Test
     void valuesAndTextForAPerson() {
+        // By hand: Mohr's circle of (120, −40, 30) MPa has centre 40 and radius √(80² + 30²) =
+        // √7300 MPa.
         PlaneStrain e = PlaneStrain.of(Strain.ofMicrostrain(800), Strain.ofMicrostrain(-200),
                 Strain.ofMicrostrain(600));
         assertThat(e).hasToString("PlaneStrain[exx=800.0 µε, eyy=-200.0 µε, gxy=600.0 µε]");

@@ -12,6 +12,7 @@ class ResistanceTest {
 
     @Test
     void unitsConvertByDefinition() {
+        // Definition: the SI prefixes k = 1e3 and M = 1e6 (SI Brochure, 9th ed.).
         assertThat(Resistance.ofKiloohms(174.65).toOhms()).isEqualTo(174_650.0);
         assertThat(Resistance.ofMegaohms(1.2).toKiloohms()).isEqualTo(1200.0);
         assertThat(Resistance.ofOhms(2.5e6).toMegaohms()).isEqualTo(2.5);
@@ -31,6 +32,7 @@ class ResistanceTest {
 
     @Test
     void textPicksTheReadableUnit() {
+        // The library's own text rule, by hand: Ω below 1 kΩ, kΩ below 1 MΩ, MΩ above.
         assertThat(Resistance.ofOhms(350)).hasToString("350.0 Ω");
         assertThat(Resistance.ofOhms(174_650)).hasToString("174.65 kΩ");
         assertThat(Resistance.ofMegaohms(2)).hasToString("2.0 MΩ");

@@ -34,6 +34,7 @@ class StrainTest {
 
     @Test
     void equalityOrderAndText() {
+        // The library's own text rule, by hand: microstrain to six significant digits.
         assertThat(Strain.ofMicrostrain(250)).isEqualTo(Strain.of(2.5e-4))
                 .hasSameHashCodeAs(Strain.of(2.5e-4))
                 .isNotEqualTo(Strain.ofMicrostrain(251))

@@ -41,6 +41,7 @@ class StressTest {
 
     @Test
     void arithmeticKeepsUnits() {
+        // By hand: sums, a product and a quotient of megapascal values exact in binary.
         Stress a = Stress.ofMegapascals(120);
         Stress b = Stress.ofMegapascals(-40);
         assertThat(a.plus(b).toMegapascals()).isEqualTo(80.0);

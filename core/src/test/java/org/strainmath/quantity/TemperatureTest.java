@@ -24,6 +24,7 @@ class TemperatureTest {
 
     @Test
     void differencesAreInKelvin() {
+        // Definition: a difference of 1 °C is a difference of 1 K (ISO 80000-5).
         assertThat(Temperature.ofCelsius(80).kelvinAbove(Temperature.ofCelsius(20)))
                 .isCloseTo(60.0, within(1e-12));
     }

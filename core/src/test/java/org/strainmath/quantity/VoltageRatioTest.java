@@ -11,6 +11,7 @@ class VoltageRatioTest {
 
     @Test
     void unitsConvertByDefinition() {
+        // Definition: 1 mV/V = 1e-3 V/V (common practice, no source).
         assertThat(VoltageRatio.ofMillivoltsPerVolt(2).toVoltsPerVolt()).isEqualTo(0.002);
         assertThat(VoltageRatio.ofVoltsPerVolt(0.002).toMillivoltsPerVolt()).isEqualTo(2.0);
     }
@@ -24,6 +25,7 @@ class VoltageRatioTest {
 
     @Test
     void arithmetic() {
+        // By hand: 1.5 + 0.5 = 2, 1.5 − 0.5 = 1 and 0.5 × 4 = 2 mV/V.
         VoltageRatio a = VoltageRatio.ofMillivoltsPerVolt(1.5);
         VoltageRatio b = VoltageRatio.ofMillivoltsPerVolt(0.5);
         assertThat(a.plus(b)).isEqualTo(VoltageRatio.ofMillivoltsPerVolt(2));
@@ -33,6 +35,7 @@ class VoltageRatioTest {
 
     @Test
     void equalityOrderAndText() {
+        // By hand: 4.995004995e-4 V/V is 1/2002, shown as 0.4995 mV/V to four significant digits.
         assertThat(VoltageRatio.ofMillivoltsPerVolt(2)).isEqualTo(VoltageRatio.ofVoltsPerVolt(0.002))
                 .hasSameHashCodeAs(VoltageRatio.ofVoltsPerVolt(0.002))
                 .isGreaterThan(VoltageRatio.ZERO)

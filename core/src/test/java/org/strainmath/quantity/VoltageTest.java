@@ -12,6 +12,7 @@ class VoltageTest {
 
     @Test
     void unitsConvertByDefinition() {
+        // Definition: the SI prefixes m = 1e-3 and µ = 1e-6 (SI Brochure, 9th ed.).
         assertThat(Voltage.ofMillivolts(1.5).toVolts()).isEqualTo(0.0015);
         assertThat(Voltage.ofMicrovolts(250).toMillivolts()).isCloseTo(0.25, within(1e-16));
         assertThat(Voltage.ofVolts(0.0015).toMicrovolts()).isCloseTo(1500.0, within(1e-12));
@@ -19,6 +20,7 @@ class VoltageTest {
 
     @Test
     void arithmeticAndRatios() {
+        // By hand: 10 ± 2 V, 2 mV × 100 = 0.2 V, 3 mV / 10 V = 0.3 mV/V.
         Voltage ten = Voltage.ofVolts(10);
         assertThat(ten.plus(Voltage.ofVolts(2)).toVolts()).isEqualTo(12.0);
         assertThat(ten.minus(Voltage.ofVolts(2)).toVolts()).isEqualTo(8.0);

@@ -26,6 +26,7 @@ class ModuleLayoutTest {
 
     @Test
     void coreQuantitiesAreReadable() {
+        // Definition: 250 µε read back as given.
         assertThat(ModuleLayoutTest.class.getModule().canRead(Strain.class.getModule())).isTrue();
         assertThat(Strain.ofMicrostrain(250).toMicrostrain()).isEqualTo(250.0);
     }
