@@ -19,8 +19,10 @@ import org.strainmath.quantity.Stress;
  * The strain–life solution against Commons Math's Brent solver on the same published equations,
  * the transition life's closed form, and round trips. The constants are those of a
  * high-strength steel as tabulated for AISI 4340 in Dowling, <i>Mechanical Behavior of
- * Materials</i> (E = 207 GPa, σf' = 1758 MPa, b = −0.0977, εf' = 2.12, c = −0.774; from
- * memory, not checked against the table): what is checked is the solution, not the steel.
+ * Materials</i> (E = 207 GPa, σf' = 1758 MPa, b = −0.0977, εf' = 2.12, c = −0.774; σf' and b
+ * as the book's stress-life example uses them, see TextbookExamplesTest, the other three from
+ * memory): what is checked is the solution, not the steel. No worked strain-life example of a
+ * textbook was at hand to check against.
  */
 class StrainLifeTest {
 
