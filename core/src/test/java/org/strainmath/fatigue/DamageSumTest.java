@@ -88,8 +88,13 @@ class DamageSumTest {
         DamageSum b = DETAIL_71.newDamageSum();
         a.accept(0, 100e6, 1);
         b.accept(0, 100e6, 0.5);
+        b.accept(0, 20e6, 2);      // below the cut-off: counted, harmless
         a.addAll(b);
+        // By hand: 1.5 cycles of 100 MPa, N = 715 822 each (see SnCurveTest); 2 harmless cycles.
         assertThat(a.damage()).isCloseTo(1.5 / 715_822.0, within(1e-18));
+        assertThat(a.cycles()).isEqualTo(3.5);
+        assertThat(a.harmlessCycles()).isEqualTo(2.0);
+        assertThat(a.life()).isEqualTo(DETAIL_71);
         assertThatThrownBy(() -> a.addAll(StressLife.of(SnCurve.ofRange(Stress.ofMegapascals(90),
                 2e6, 3)).newDamageSum())).isInstanceOf(IllegalArgumentException.class)
                 .hasMessageStartingWith("other must sum over StressLife[");

@@ -34,6 +34,37 @@ class SnCurveTest {
     }
 
     @Test
+    void aCurveReadsBackItsDefinitionAndIsAValue() {
+        // Definition: the values as given; built here, not in a constant, so that each test
+        // run computes the knee and the cut-off anew.
+        SnCurve curve = SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3).withKnee(5e6, 5)
+                .withCutOffAt(1e8);
+        assertThat(curve.referenceRange()).isEqualTo(Stress.ofMegapascals(71));
+        assertThat(curve.referenceCycles()).isEqualTo(2e6);
+        assertThat(curve.slope()).isEqualTo(3.0);
+        assertThat(curve.kneeCycles()).hasValue(5e6);
+        assertThat(curve.secondSlope()).hasValue(5.0);
+        assertThat(SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3).kneeCycles()).isEmpty();
+        assertThat(SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3).secondSlope()).isEmpty();
+        // By hand, on the second slope: Δσ(10⁷) = Δσ_D·(5·10⁶/10⁷)^(1/5) = 52.3132·0.870551
+        // = 45.541 MPa; the cut-off itself still does damage, just below it none.
+        assertThat(curve.rangeAt(1e7).toMegapascals()).isCloseTo(45.541, within(5e-4));
+        Stress cutOff = curve.cutOff().orElseThrow();
+        assertThat(curve.cyclesToFailure(cutOff)).isCloseTo(1e8, within(1e-4));
+        assertThat(curve).isEqualTo(DETAIL_71).hasSameHashCodeAs(DETAIL_71).isNotEqualTo("curve");
+        for (SnCurve other : new SnCurve[] {
+            SnCurve.ofRange(Stress.ofMegapascals(80), 2e6, 3).withKnee(5e6, 5).withCutOffAt(1e8),
+            SnCurve.ofRange(Stress.ofMegapascals(71), 1e6, 3).withKnee(5e6, 5).withCutOffAt(1e8),
+            SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 4).withKnee(5e6, 5).withCutOffAt(1e8),
+            SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3).withKnee(1e7, 5).withCutOffAt(1e8),
+            SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3).withKnee(5e6, 4).withCutOffAt(1e8),
+            SnCurve.ofRange(Stress.ofMegapascals(71), 2e6, 3).withKnee(5e6, 5)}) {
+            assertThat(other).isNotEqualTo(curve);
+            assertThat(other.hashCode()).isNotEqualTo(curve.hashCode());
+        }
+    }
+
+    @Test
     void eurocodeLivesByHand() {
         // By hand: 100 MPa is above Δσ_D: N = 2·10⁶·(71/100)³ = 2·10⁶·0.357911 = 715 822;
         // 40 MPa is below it: N = 5·10⁶·(Δσ_D/40)⁵.

@@ -127,6 +127,30 @@ class StrainLifeTest {
     }
 
     @Test
+    void theConstantsReadBackAndEachDefinesTheValue() {
+        // Definition: the constants as given; a curve differs from one with any constant changed
+        // or another correction.
+        assertThat(STEEL.modulus()).isEqualTo(Stress.ofGigapascals(207));
+        assertThat(STEEL.strengthCoefficient()).isEqualTo(Stress.ofMegapascals(1758));
+        assertThat(STEEL.strengthExponent()).isEqualTo(-0.0977);
+        assertThat(STEEL.ductilityCoefficient()).isEqualTo(2.12);
+        assertThat(STEEL.ductilityExponent()).isEqualTo(-0.774);
+        StrainLife same = StrainLife.of(Stress.ofGigapascals(207), Stress.ofMegapascals(1758),
+                -0.0977, 2.12, -0.774);
+        assertThat(same).isEqualTo(STEEL).hasSameHashCodeAs(STEEL).isNotEqualTo("STEEL");
+        for (StrainLife other : new StrainLife[] {
+            StrainLife.of(Stress.ofGigapascals(200), Stress.ofMegapascals(1758), -0.0977, 2.12, -0.774),
+            StrainLife.of(Stress.ofGigapascals(207), Stress.ofMegapascals(1700), -0.0977, 2.12, -0.774),
+            StrainLife.of(Stress.ofGigapascals(207), Stress.ofMegapascals(1758), -0.09, 2.12, -0.774),
+            StrainLife.of(Stress.ofGigapascals(207), Stress.ofMegapascals(1758), -0.0977, 2.0, -0.774),
+            StrainLife.of(Stress.ofGigapascals(207), Stress.ofMegapascals(1758), -0.0977, 2.12, -0.7),
+            STEEL.withMorrowCorrection(), STEEL.withSmithWatsonTopper()}) {
+            assertThat(other).isNotEqualTo(STEEL);
+            assertThat(other.hashCode()).isNotEqualTo(STEEL.hashCode());
+        }
+    }
+
+    @Test
     void badConstantsAreRefused() {
         assertThatThrownBy(() -> StrainLife.of(Stress.ZERO, Stress.ofMegapascals(1758), -0.1, 1, -0.6))
                 .isInstanceOf(IllegalArgumentException.class)

@@ -174,6 +174,57 @@ class HistogramsTest {
     }
 
     @Test
+    void matricesAndCrossingsOfTwoPartsAddUp() {
+        // By hand: bins of width 1; the cell each cycle falls in, what lies outside, and the sum
+        // of two parts.
+        Bins ranges = Bins.uniform(0, 10, 10);
+        Bins means = Bins.uniform(-5, 5, 10);
+        RangeMeanMatrix a = RangeMeanMatrix.of(ranges, means);
+        RangeMeanMatrix b = RangeMeanMatrix.of(ranges, means);
+        a.accept(-1, 3, 1);        // range 4 (row 4) about 1 (column 6)
+        b.accept(-1, 3, 0.5);
+        b.accept(0, 12, 1);        // range 12: outside
+        b.accept(8, 9, 0.5);       // mean 8.5: outside
+        a.addAll(b);
+        assertThat(a.count(4, 6)).isEqualTo(1.5);
+        assertThat(a.total()).isEqualTo(1.5);
+        assertThat(a.outside()).isEqualTo(1.5);
+        assertThat(a.ranges()).isEqualTo(ranges);
+        assertThat(a.means()).isEqualTo(means);
+        assertThatThrownBy(() -> a.addAll(RangeMeanMatrix.of(ranges, Bins.uniform(-5, 5, 5))))
+                .isInstanceOf(IllegalArgumentException.class);
+
+        FromToMatrix f = FromToMatrix.of(means);
+        FromToMatrix g = FromToMatrix.of(means);
+        f.accept(-1, 3, 1);        // from bin 4 to bin 8
+        g.accept(-1, 3, 0.5);
+        g.accept(-6, 3, 1);        // from -6: outside
+        f.addAll(g);
+        assertThat(f.count(4, 8)).isEqualTo(1.5);
+        assertThat(f.total()).isEqualTo(1.5);
+        assertThat(f.outside()).isEqualTo(1.0);
+        assertThat(f.levels()).isEqualTo(means);
+        assertThatThrownBy(() -> f.addAll(FromToMatrix.of(Bins.uniform(-5, 5, 5))))
+                .isInstanceOf(IllegalArgumentException.class);
+
+        // A rising half cycle from -1 to 3 crosses 0 and 2 upwards once; a full cycle between
+        // -3 and 1 crosses -2 and 0 once each way.
+        LevelCrossings up = LevelCrossings.of(-2, 0, 2);
+        LevelCrossings more = LevelCrossings.of(-2, 0, 2);
+        up.accept(-1, 3, 0.5);
+        more.accept(-3, 1, 1);
+        up.addAll(more);
+        assertThat(up.upCrossings()).containsExactly(1, 2, 1);
+        assertThat(up.downCrossings()).containsExactly(1, 1, 0);
+        assertThat(up.levels()).containsExactly(-2, 0, 2);
+        // about 0 (the class comment's rule): upward crossings at and above it, downward below
+        assertThat(up.countsAbout(0)).containsExactly(1, 2, 1);
+        assertThat(up.countsAbout(0.5)).containsExactly(1, 1, 1);
+        assertThatThrownBy(() -> up.addAll(LevelCrossings.of(-2, 0, 3)))
+                .isInstanceOf(IllegalArgumentException.class);
+    }
+
+    @Test
     void equivalentRangesByHand() {
         // By hand: 10⁵ cycles of 100 and 10⁶ of 50, m = 3: Σ n·S³ = 10¹¹ + 1.25·10¹¹ =
         // 2.25·10¹¹; over 1.1·10⁶ cycles S_eq = (204 545.45...)^(1/3) = 58.946...; at 2·10⁶

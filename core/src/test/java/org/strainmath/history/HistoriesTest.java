@@ -128,4 +128,41 @@ class HistoriesTest {
         }
         return n;
     }
+
+    @Test
+    void blockArgumentsOfThePlaneNormalAreCheckedAndNaNIsCounted() {
+        // By hand at 45° (cos 90° = 0, sin 90° = 1): σn = (σx + σy)/2 + τxy = (2 + 4)/2 + 3 = 6;
+        // a NaN sample gives NaN and is counted.
+        double[] sxx = {2, Double.NaN, 2};
+        double[] syy = {4, 4, 4};
+        double[] txy = {3, 3, 3};
+        double[] out = new double[3];
+        assertThat(Histories.normalOnPlane(sxx, syy, txy, 0, Angle.ofDegrees(45), out, 0, 3))
+                .isEqualTo(1);
+        assertThat(out[0]).isCloseTo(6.0, within(1e-15));
+        assertThat(out[1]).isNaN();
+        assertThatThrownBy(() -> Histories.normalOnPlane(sxx, syy, txy, 1, Angle.ZERO, out, 0, 3))
+                .isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> Histories.normalOnPlane(sxx, syy, txy, 0, Angle.ZERO, out, 1, 3))
+                .isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> Histories.normalOnPlane(sxx, syy, new double[2], 0, Angle.ZERO,
+                out, 0, 3)).isInstanceOf(IndexOutOfBoundsException.class);
+        double[] shared = {2, 4, 3, 0};
+        for (double[] input : new double[][] {sxx, syy, txy}) {
+            double[] x = input == sxx ? shared : sxx;
+            double[] y = input == syy ? shared : syy;
+            double[] t = input == txy ? shared : txy;
+            assertThatThrownBy(() -> Histories.normalOnPlane(x, y, t, 0, Angle.ZERO, shared, 1, 3))
+                    .isInstanceOf(IllegalArgumentException.class)
+                    .hasMessageContaining("must not overlap dst");
+        }
+        assertThatThrownBy(() -> Histories.largerMagnitude(new double[3], new double[3], 0,
+                new double[2], 0, 3)).isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> Histories.largerMagnitude(new double[3], new double[2], 0,
+                new double[3], 0, 3)).isInstanceOf(IndexOutOfBoundsException.class);
+        double[] s2 = {1, 2, 3, 4};
+        assertThatThrownBy(() -> Histories.largerMagnitude(new double[4], s2, 0, s2, 1, 3))
+                .isInstanceOf(IllegalArgumentException.class)
+                .hasMessageStartingWith("s2 must not overlap dst");
+    }
 }

@@ -11,6 +11,7 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.EnumSource;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
@@ -75,21 +76,27 @@ class RainflowCounterTest {
         assertThat(counter.samples()).isEqualTo(x.length - skipped);
     }
 
-    @Test
-    void aCounterGoesOnAfterAReportAsIfThereHadBeenNone() {
+    @ParameterizedTest
+    @EnumSource(Rainflow.Residue.class)
+    void aCounterGoesOnAfterAReportAsIfThereHadBeenNone(Rainflow.Residue residue) {
         double[] x = RainflowReference.history(new SplittableRandom(7), 3000, 0);
+        Rainflow rainflow = Rainflow.astm().withResidue(residue);
         Cycles.Collector a = new Cycles.Collector();
         Cycles.Collector b = new Cycles.Collector();
-        RainflowCounter plain = Rainflow.astm().newCounter(a);
-        RainflowCounter reported = Rainflow.astm().newCounter(b);
+        RainflowCounter plain = rainflow.newCounter(a);
+        RainflowCounter reported = rainflow.newCounter(b);
         for (int i = 0; i < x.length; i += 100) {
             plain.accept(x, i, 100);
             reported.accept(x, i, 100);
             Cycles.Collector sofar = new Cycles.Collector();
             reported.residueTo(sofar);
+            // a second report of the same samples gives the same residue's cycles
+            Cycles.Collector again = new Cycles.Collector();
+            reported.residueTo(again);
+            assertThat(again.toCycles(0)).isEqualTo(sofar.toCycles(0));
             // what the consumer holds plus the residue's cycles is the count of the samples so far
             Cycles.Collector both = new Cycles.Collector();
-            RainflowCounter replay = Rainflow.astm().newCounter(both);
+            RainflowCounter replay = rainflow.newCounter(both);
             replay.accept(x, 0, i + 100);
             replay.residueTo(both);
             assertThat(both.toCycles(0).total()).isEqualTo(
@@ -98,6 +105,27 @@ class RainflowCounterTest {
         plain.residueTo(a);
         reported.residueTo(b);
         assertThat(b.toCycles(0)).isEqualTo(a.toCycles(0));
+        assertThat(reported.rainflow()).isEqualTo(rainflow);
+    }
+
+    @Test
+    void theResidueHoldsTheTurningPointsNoCycleClosed() {
+        // By hand, ASTM E1049-85 5.4.4's rule on 0 5 1 4 2: 1-4 (range 3) is smaller than 5-1
+        // (range 4), and 5-1 smaller than 0-5 (range 5), so no cycle closes; 0, 5, 1, 4 are
+        // confirmed turning points and 2, the last sample, is the open extreme.
+        RainflowCounter counter = Rainflow.astm().newCounter((f, t, c) -> { });
+        counter.accept(new double[] {0, 5, 1, 4, 2}, 0, 5);
+        assertThat(counter.residue()).containsExactly(0, 5, 1, 4);
+        assertThat(counter.residueSize()).isEqualTo(4);
+        assertThat(counter.turningPoints()).isEqualTo(4);
+        assertThat(counter.samples()).isEqualTo(5);
+        // By hand: 6 turns 2 into a valley; 4-2 (range 2) is smaller than 1-4 (3), so nothing
+        // closes and 6 is the open extreme.
+        counter.accept(6);
+        assertThat(counter.residue()).containsExactly(0, 5, 1, 4, 2);
+        counter.reset();
+        assertThat(counter.residueSize()).isZero();
+        assertThat(counter.turningPoints()).isZero();
     }
 
     @Test

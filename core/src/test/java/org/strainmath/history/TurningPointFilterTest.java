@@ -62,7 +62,14 @@ class TurningPointFilterTest {
         int n = filter.accept(x, 0, x, 0, x.length);
         assertThat(java.util.Arrays.copyOf(x, n)).containsExactly(0, 2, 0, 3, -1);
         assertThat(filter.pending().getAsDouble()).isEqualTo(2);
-        assertThat(TurningPoints.of(copy).values()).containsExactly(0, 2, 0, 3, -1, 2);
+        TurningPoints points = TurningPoints.of(copy);
+        assertThat(points.values()).containsExactly(0, 2, 0, 3, -1, 2);
+        // By hand: where each lies in the history (the first of the two equal -1 samples)
+        assertThat(points.indices()).containsExactly(0, 2, 4, 5, 6, 8);
+        assertThat(points.value(3)).isEqualTo(3.0);
+        assertThat(points.index(3)).isEqualTo(5);
+        assertThat(points.gate()).isZero();
+        assertThat(TurningPoints.of(copy, 1.5).gate()).isEqualTo(1.5);
         assertThat(filter).hasToString("TurningPointFilter[gate 0.0, 9 samples, 0 skipped]");
     }
 
