@@ -1,8 +1,6 @@
 package org.strainmath.benchmarks;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.InputStream;
 import java.io.PrintStream;
 import java.io.UncheckedIOException;
 import java.math.BigDecimal;
@@ -178,7 +176,7 @@ public final class Headroom {
                 Integer.toString(timing.runs), Long.toString(timing.runMillis));
         try {
             Process process = new ProcessBuilder(command).redirectErrorStream(true).start();
-            String output = readAll(process.getInputStream());
+            String output = new String(process.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
             int status = process.waitFor();
             if (status != 0) {
                 throw new IllegalStateException("the measuring JVM exited with " + status + ": "
@@ -199,12 +197,6 @@ public final class Headroom {
         } catch (NumberFormatException e) {
             throw new IllegalStateException("the measuring JVM printed no throughput: " + e.getMessage(), e);
         }
-    }
-
-    private static String readAll(InputStream in) throws IOException {
-        ByteArrayOutputStream buffer = new ByteArrayOutputStream();
-        in.transferTo(buffer);
-        return buffer.toString(StandardCharsets.UTF_8);
     }
 
     /**

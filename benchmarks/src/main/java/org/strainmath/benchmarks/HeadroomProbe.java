@@ -16,8 +16,8 @@ import org.strainmath.rosette.Rosette;
 
 /**
  * The measuring half of the headroom report: run in a fresh JVM by {@link Headroom}, it times one
- * chain's block kernel and prints one throughput per timed run, one per line. Not meant to be
- * run by hand.
+ * chain's block kernel and prints one throughput per timed run, one per line. By hand it takes
+ * the same four arguments, e.g. {@code HeadroomProbe rosette 5000 5 1000} (docs/performance.md).
  *
  * <p>Each chain is set up exactly as the JMH benchmark named in {@link Headroom.Chain} at a block
  * of 4096 (same configuration, same seeded signal), so that the two can be compared.
