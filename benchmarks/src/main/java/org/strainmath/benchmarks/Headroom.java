@@ -30,15 +30,15 @@ import java.util.Locale;
  * {@code rosette} (three readings per rosette to ε1, ε2 and von Mises; a channel is a rosette).
  *
  * <p>Each fresh JVM (the same Java as the report's, default options) runs {@link HeadroomProbe}:
- * a warm-up, then timed runs of the chain's block kernel on blocks of 4096 seeded samples, set up
- * as the JMH benchmark the chain names. A JIT compiles a kernel differently from one JVM to the
+ * a warm-up, then timed runs of the JMH benchmark the chain names, on its own state at a block
+ * of 4096. A JIT compiles a kernel differently from one JVM to the
  * next, so the report takes the median of the JVMs' medians and shows how far they lie apart. It
  * is a quick estimate for planning; the JMH benchmarks of this module stay the reference figures
  * (docs/performance.md compares the two).
  */
 public final class Headroom {
 
-    /** The chains a channel can run, each with the JMH benchmark it is set up as. */
+    /** The chains a channel can run, each with the JMH benchmark it runs. */
     enum Chain {
         BRIDGE("quarter-bridge output ratios to strain", "samples", "channels",
                 "BridgeInverseBenchmark.quarterBlock"),

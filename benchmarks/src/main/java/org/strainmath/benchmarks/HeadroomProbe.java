@@ -3,24 +3,14 @@ package org.strainmath.benchmarks;
 import java.util.Arrays;
 import java.util.Locale;
 
-import org.strainmath.bridge.AdcInput;
-import org.strainmath.bridge.Bridge;
-import org.strainmath.bridge.StrainChannel;
-import org.strainmath.bridge.StrainGauge;
-import org.strainmath.bridge.ThermalOutput;
-import org.strainmath.material.IsotropicMaterial;
-import org.strainmath.quantity.Resistance;
-import org.strainmath.quantity.Stress;
-import org.strainmath.quantity.Temperature;
-import org.strainmath.rosette.Rosette;
-
 /**
  * The measuring half of the headroom report: run in a fresh JVM by {@link Headroom}, it times one
  * chain's block kernel and prints one throughput per timed run, one per line. By hand it takes
  * the same four arguments, e.g. {@code HeadroomProbe rosette 5000 5 1000} (docs/performance.md).
  *
- * <p>Each chain is set up exactly as the JMH benchmark named in {@link Headroom.Chain} at a block
- * of 4096 (same configuration, same seeded signal), so that the two can be compared.
+ * <p>Each chain runs the JMH benchmark named in {@link Headroom.Chain}: its state class, set up
+ * by its own {@code setUp} at a block of 4096, and its benchmark method, so that the two measure
+ * the same work.
  */
 public final class HeadroomProbe {
 
@@ -69,46 +59,29 @@ public final class HeadroomProbe {
         return rates;
     }
 
-    /** One block call of the chain on the JMH benchmark's inputs (a sink keeps it alive). */
+    /**
+     * One block call of the chain: the JMH benchmark's own state, set up by its own
+     * {@code setUp} at a block of 4096, and its benchmark method (a sink keeps the result).
+     */
     private static Runnable blockOf(Headroom.Chain chain) {
-        double[] out = new double[BLOCK];
         switch (chain) {
             case BRIDGE: {
-                // As BridgeInverseBenchmark.quarterBlock.
-                Bridge bridge = Bridge.quarter(StrainGauge.ofOhms(350, 2.1));
-                double[] ratios = new double[BLOCK];
-                bridge.toRatio(Signals.strain(BLOCK, 1500e-6, 0x5EED), 0, ratios, 0, BLOCK);
-                return () -> Sink.keep(bridge.toStrain(ratios, 0, out, 0, BLOCK));
+                BridgeInverseBenchmark state = new BridgeInverseBenchmark();
+                state.size = BLOCK;
+                state.setUp();
+                return () -> Sink.keep(state.quarterBlock());
             }
             case CORRECTED: {
-                // As ChannelBenchmark.channelBlockWithThermalOutput.
-                StrainGauge gauge = StrainGauge.ofOhms(350, 2.08).withTransverseSensitivity(0.006);
-                Bridge bridge = Bridge.quarter(gauge).withThreeWireLeads(Resistance.ofOhms(1.7));
-                AdcInput adc = AdcInput.ratiometric(24, 128);
-                StrainChannel channel = StrainChannel.of(bridge, adc).withTransverseCorrection(-0.29)
-                        .zeroedByOffsetAt(-2140)
-                        .withThermalOutput(ThermalOutput.ofCelsius(-28.4, 2.05, -0.047, 1.6e-4),
-                                Temperature.ofCelsius(22));
-                double[] strain = Signals.strain(BLOCK, 1500e-6, 0xC0DE);
-                double perCode = adc.ratioPerCode().toVoltsPerVolt();
-                int[] codes = new int[BLOCK];
-                double[] celsius = new double[BLOCK];
-                for (int i = 0; i < BLOCK; i++) {
-                    codes[i] = (int) Math.round(bridge.toRatio(strain[i]) / perCode) - 2140;
-                    celsius[i] = 22 + 15 * Math.sin(2 * Math.PI * i / BLOCK);
-                }
-                return () -> Sink.keep(channel.toStrain(codes, 0, celsius, 0, out, 0, BLOCK));
+                ChannelBenchmark state = new ChannelBenchmark();
+                state.size = BLOCK;
+                state.setUp();
+                return () -> Sink.keep(state.channelBlockWithThermalOutput());
             }
             default: {
-                // As RosetteBenchmark.principalAndVonMises.
-                Rosette rosette = Rosette.rectangular()
-                        .withMaterial(IsotropicMaterial.of(Stress.ofGigapascals(200), 0.30));
-                double[][] readings = {Signals.strain(BLOCK, 900e-6, 0xA1),
-                    Signals.strain(BLOCK, 300e-6, 0xB2), Signals.strain(BLOCK, -250e-6, 0xC3)};
-                double[] e2 = new double[BLOCK];
-                double[] vonMises = new double[BLOCK];
-                return () -> Sink.keep(rosette.toPrincipalStrainsAndVonMises(readings, 0, out, e2,
-                        vonMises, 0, BLOCK));
+                RosetteBenchmark state = new RosetteBenchmark();
+                state.size = BLOCK;
+                state.setUp();
+                return () -> Sink.keep(state.principalAndVonMises());
             }
         }
     }
